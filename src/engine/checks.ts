@@ -1,0 +1,185 @@
+import type { Analysis, Finding, Severity } from './analysis-types';
+import type { SegmentStats } from './analyze';
+import { type Prepared, voltAt } from './prepare';
+import { formatEng } from './values';
+
+/** Resistor power rating assumed when the design names none (W): common practice, no source. */
+export const DEFAULT_RESISTOR_RATING = 0.125;
+
+/**
+ * The checks of ENGINE.md §5. Each finding names the part, where in x, how much, and what to change.
+ */
+export function runChecks(p: Prepared, a: Analysis, st: SegmentStats): Finding[] {
+  const out: Finding[] = [];
+  const unit = p.design.quantity.unit;
+  const fx = (x: number) => formatEng(x, unit);
+  const add = (severity: Severity, code: string, part: string, x: number | null, amount: string, message: string, fix: string) =>
+    out.push({ severity, code, part, x, amount, message, fix });
+  const { design, net } = p;
+  const part = design.part;
+
+  for (const band of a.chatter) {
+    add('error', 'no-stable-state', band.elements.join(', '), band.from, `${fx(band.from)} to ${fx(band.to)}`,
+      `No stable state while x goes ${band.direction} from ${fx(band.from)} to ${fx(band.to)}: ${band.elements.join(', ')} keep flipping, so the output will oscillate there.`,
+      'Check that each feedback resistor goes to the non-inverting input and that wired outputs do not feed back into their own signal.');
+  }
+  for (const ch of design.channels) {
+    if (ch.feedback?.to === 'minus') {
+      add('error', 'negative-feedback', ch.id, null, formatEng(ch.feedback.ohms, 'Ω'),
+        `Channel ${ch.id} has its feedback resistor on the inverting input: that is negative feedback, which makes a comparator oscillate instead of giving hysteresis.`,
+        `Move RF:${ch.id} to the non-inverting input (feedback.to = "plus").`);
+    }
+  }
+
+  // Common-mode range and supply rating, at every segment end.
+  const cmWorst = new Map<string, { over: number; x: number; v: number; low: boolean }>();
+  let supplyLow: { v: number; x: number } | null = null;
+  let supplyHigh: { v: number; x: number } | null = null;
+  for (const s of st.samples) {
+    const vs = voltAt(s.sol, net.supply, s.x);
+    if (vs < part.supplyMin && (!supplyLow || vs < supplyLow.v)) supplyLow = { v: vs, x: s.x };
+    if (vs > part.supplyMax && (!supplyHigh || vs > supplyHigh.v)) supplyHigh = { v: vs, x: s.x };
+    for (const c of net.comparators) {
+      for (const pin of [c.plus, c.minus]) {
+        const v = voltAt(s.sol, pin, s.x);
+        const top = vs - part.cmHeadroom;
+        const over = Math.max(v - top, part.cmMin - v);
+        const prev = cmWorst.get(c.id);
+        if (over > 0 && (!prev || over > prev.over)) cmWorst.set(c.id, { over, x: s.x, v, low: v < part.cmMin });
+      }
+    }
+  }
+  for (const [id, w] of cmWorst) {
+    add('error', 'common-mode', id, w.x, `${formatEng(w.over, 'V')} ${w.low ? 'below' : 'above'} the limit`,
+      `An input of channel ${id} reaches ${formatEng(w.v, 'V')} at x = ${fx(w.x)}, outside the part's common-mode range.`,
+      w.low ? 'Keep both inputs above the part\'s lowest input voltage.' : `Scale the input or the string down so both inputs stay at least ${formatEng(part.cmHeadroom, 'V')} below the supply.`);
+  }
+  if (supplyLow) {
+    add('warning', 'supply-low', 'supply', supplyLow.x, `${formatEng(part.supplyMin - supplyLow.v, 'V')} below`,
+      `The supply falls to ${formatEng(supplyLow.v, 'V')}, below the part class minimum of ${formatEng(part.supplyMin, 'V')}.`,
+      'Raise the quantity range minimum, or choose a part class rated for the lower supply.');
+  }
+  if (supplyHigh) {
+    const abs = supplyHigh.v > part.absMaxSupply;
+    add(abs ? 'error' : 'warning', 'supply-high', 'supply', supplyHigh.x, `${formatEng(supplyHigh.v - part.supplyMax, 'V')} above`,
+      `The supply reaches ${formatEng(supplyHigh.v, 'V')}, above the part class ${abs ? 'absolute maximum' : 'recommended maximum'}.`,
+      'Lower the supply range or choose a part class rated for it.');
+  }
+
+  checkOutputs(p, st, add);
+  checkReference(p, st, a, add, fx);
+  checkHysteresis(p, a, add, fx);
+  checkSlots(p, add);
+  for (const [id, w] of Object.entries(st.dissipation)) {
+    if (w > DEFAULT_RESISTOR_RATING) {
+      add('warning', 'dissipation', id, null, formatEng(w, 'W'),
+        `${id} dissipates up to ${formatEng(w, 'W')}, over the ${formatEng(DEFAULT_RESISTOR_RATING, 'W')} assumed rating.`,
+        'Use a larger resistance or a resistor with a higher power rating.');
+    }
+  }
+  return out;
+}
+
+type Add = (severity: Severity, code: string, part: string, x: number | null, amount: string, message: string, fix: string) => void;
+
+function checkOutputs(p: Prepared, st: SegmentStats, add: Add): void {
+  const { design } = p;
+  const openCollector = design.part.output === 'open-collector';
+  for (const ch of design.channels) {
+    if (ch.wiredTo && !openCollector) {
+      add('error', 'wired-push-pull', ch.id, null, '', `Channel ${ch.id} is wired to ${ch.wiredTo}, but push-pull outputs fight each other when tied.`,
+        'Use an open-collector or open-drain part class, or combine the outputs with logic.');
+    }
+    const group = design.channels.filter((c) => c.id === ch.id || c.wiredTo === ch.id || ch.wiredTo === c.id);
+    const loaded = group.some((c) => c.pullup || c.led) || design.channels.some((c) => c.led?.anode === `out:${ch.id}` || c.pullup?.to === `out:${ch.id}`);
+    if (openCollector && !loaded) {
+      add('warning', 'floating-output', ch.id, null, '', `The output of channel ${ch.id} has no pull-up or LED: it floats when off.`,
+        `Add a pull-up resistor from out:${ch.id} to the supply, or an LED.`);
+    }
+    const sink = st.sinkMax[ch.id] ?? 0;
+    if (sink > design.part.sinkMax) {
+      add('error', 'sink-current', ch.id, null, `${formatEng(sink - design.part.sinkMax, 'A')} over`,
+        `Channel ${ch.id} sinks up to ${formatEng(sink, 'A')}, over the part's ${formatEng(design.part.sinkMax, 'A')} rating.`,
+        'Raise the LED or pull-up resistor.');
+    }
+  }
+}
+
+function checkReference(p: Prepared, st: SegmentStats, a: Analysis, add: Add, fx: (x: number) => string): void {
+  const ref = p.design.reference;
+  const nc = p.net.comparators.length;
+  if (ref.kind === 'supply') {
+    if (p.design.supply.kind === 'measured' && p.design.input.signal === 'voltage') {
+      add('error', 'ratiometric-measured', 'reference', null, '', 'The string runs from the supply, and the supply is the quantity being measured: every threshold moves with x, so the ladder cannot resolve it.',
+        'Feed the string from a shunt or external reference.');
+    } else if (p.design.supply.kind === 'fixed' && p.design.supply.max > p.design.supply.min) {
+      const s = p.design.supply;
+      add('warning', 'ratiometric', 'reference', null, `±${formatEng(((s.max - s.min) / 2 / s.volts) * 100, '%', { digits: 2 })}`,
+        `The string runs from the supply, so thresholds on it move with the supply over ${formatEng(s.min, 'V')} to ${formatEng(s.max, 'V')}.`,
+        'Use a reference for the string, or accept the spread (see the spread report).');
+    }
+    return;
+  }
+  if (ref.kind !== 'shunt') return;
+  const k = p.net.diodes.findIndex((d) => d.kind === 'shunt');
+  let worst: { i: number; x: number } | null = null;
+  let over: { i: number; x: number } | null = null;
+  for (const s of st.samples) {
+    const d = p.net.diodes[k];
+    const i = s.state[nc + k] ? (voltAt(s.sol, d.anode, s.x) - d.knee) / d.rdyn : 0;
+    if (i < ref.minCurrent && (!worst || i < worst.i)) worst = { i, x: s.x };
+    if (i > ref.maxCurrent && (!over || i > over.i)) over = { i, x: s.x };
+  }
+  if (worst) {
+    const trips = a.channels.flatMap((c) => [c.rising?.x, c.falling?.x]).filter((x): x is number => x !== undefined);
+    const near = trips.some((x) => Math.abs(x - worst!.x) <= Math.abs(p.design.quantity.max - p.design.quantity.min) * 0.02);
+    add(near ? 'error' : 'warning', 'reference-dropout', 'reference', worst.x, `${formatEng(worst.i, 'A')} of ${formatEng(ref.minCurrent, 'A')} needed`,
+      `The shunt reference gets only ${formatEng(worst.i, 'A')} at x = ${fx(worst.x)} and drops out of regulation there.`,
+      'Lower the bias resistor RB, or raise the string resistance so it draws less.');
+  }
+  if (over) {
+    add('error', 'reference-overcurrent', 'reference', over.x, formatEng(over.i, 'A'),
+      `The shunt reference carries ${formatEng(over.i, 'A')} at x = ${fx(over.x)}, over its ${formatEng(ref.maxCurrent, 'A')} rating.`,
+      'Raise the bias resistor RB.');
+  }
+}
+
+function checkHysteresis(p: Prepared, a: Analysis, add: Add, fx: (x: number) => string): void {
+  const noise = p.design.quantity.noise;
+  for (const c of a.channels) {
+    if (!c.rising && !c.falling) {
+      add('warning', 'never-trips', c.id, null, '', `Channel ${c.id} never changes state between ${fx(p.design.quantity.min)} and ${fx(p.design.quantity.max)}.`,
+        'Check its input connections and the tap it compares against.');
+      continue;
+    }
+    if (c.hysteresis !== null && noise > 0 && Math.abs(c.hysteresis) < noise) {
+      add('warning', 'hysteresis-below-noise', c.id, c.rising?.x ?? null, `${fx(Math.abs(c.hysteresis))} < ${fx(noise)}`,
+        `Channel ${c.id} has less hysteresis than the noise on x: it will flicker near its trip point.`,
+        'Lower the feedback resistor to widen the hysteresis.');
+    }
+  }
+  const steps = a.channels.filter((c) => c.rising && c.falling && c.risingTo === 'low').sort((l, r) => l.rising!.x - r.rising!.x);
+  for (let k = 1; k < steps.length; k++) {
+    const lower = steps[k - 1];
+    const upper = steps[k];
+    if (upper.falling!.x < lower.rising!.x) {
+      add('warning', 'hysteresis-over-spacing', `${lower.id}/${upper.id}`, upper.falling!.x, fx(lower.rising!.x - upper.falling!.x),
+        `The hysteresis band of ${upper.id} reaches below the trip point of ${lower.id}: the steps overlap.`,
+        'Narrow the hysteresis or spread the thresholds apart.');
+    }
+  }
+}
+
+function checkSlots(p: Prepared, add: Add): void {
+  const packages = [...new Set(p.design.channels.map((c) => c.package))].sort((l, r) => l - r);
+  for (const pkg of packages) {
+    for (let ch = 1; ch <= 4; ch++) {
+      const used = p.design.channels.some((c) => c.package === pkg && c.channel === ch);
+      const spare = p.design.spares.some((s) => s.package === pkg && s.channel === ch);
+      if (!used && !spare) {
+        add('warning', 'unused-floating', `package ${pkg} channel ${ch}`, null, '', `Channel ${ch} of package ${pkg} is unused and its inputs are not tied: it can oscillate and draw extra current.`,
+          'Add it to "spares" with + tied to ground and − to the reference (output left open): common practice.');
+      }
+    }
+  }
+}

@@ -1,0 +1,218 @@
+import { nodeAffine, type Solution, Solver, type State, stateKey } from './network/solve';
+import type { Network } from './network/types';
+
+/** Sweep direction: x rising or falling. */
+export type Direction = 'up' | 'down';
+
+/** One element changing state during a sweep. */
+export interface Flip {
+  /** Index into the state vector (comparators first, then diodes). */
+  element: number;
+  /** New value: for a comparator true = sinking; for a diode true = conducting. */
+  to: boolean;
+  /** Where it happened (unit of x). */
+  x: number;
+  direction: Direction;
+  /** Voltages at the comparator's + and − pins just before the flip (V); 0 for diodes. */
+  pinPlus: number;
+  pinMinus: number;
+}
+
+/** A stretch of x in one state. */
+export interface SweepSegment {
+  direction: Direction;
+  from: number;
+  to: number;
+  state: State;
+}
+
+/** A band with no stable state. */
+export interface Band {
+  direction: Direction;
+  from: number;
+  to: number;
+  /** Indices of the elements that cycle. */
+  elements: number[];
+}
+
+/** Result of sweeping up from `min` to `max` and back down. */
+export interface SweepResult {
+  flips: Flip[];
+  segments: SweepSegment[];
+  bands: Band[];
+  /** State at the start (x = min, settled going up). */
+  initial: State;
+}
+
+/** Numerical zero for margins (V). */
+const TOL = 1e-12;
+
+/**
+ * Margin of element `k` in `state` as the affine pair [a, b] (V): the element's present state is
+ * consistent while a + b·x >= 0.
+ */
+export function margin(net: Network, sol: Solution, state: State, k: number): [number, number] {
+  const nc = net.comparators.length;
+  if (k < nc) {
+    const c = net.comparators[k];
+    const [m0, m1] = nodeAffine(sol, c.minus);
+    const [p0, p1] = nodeAffine(sol, c.plus);
+    // d = V(−) − V(+) − Vos > 0 wants the output low.
+    const d0 = m0 - p0 - c.vos;
+    const d1 = m1 - p1;
+    return state[k] ? [d0, d1] : [-d0, -d1];
+  }
+  const d = net.diodes[k - nc];
+  const [a0, a1] = nodeAffine(sol, d.anode);
+  const [c0, c1] = nodeAffine(sol, d.cathode);
+  const f0 = a0 - c0 - d.knee;
+  const f1 = a1 - c1;
+  return state[k] ? [f0, f1] : [-f0, -f1];
+}
+
+/** How badly element k's state is violated just past x in `dir` (0 when consistent). */
+function violation(a: number, b: number, x: number, sign: number): number {
+  const m = a + b * x;
+  const scale = TOL * (1 + Math.abs(a) + Math.abs(b * x));
+  if (m > scale) return 0;
+  if (m < -scale) return -m;
+  return b * sign < 0 ? TOL * 1e-3 : 0;
+}
+
+/**
+ * The exact event-driven sweep of ENGINE.md §2: settles a consistent state at `min`, then walks from
+ * event to event up to `max` and back down, settling cascades and reporting bands with no stable
+ * state. Iterations are bounded by the element count.
+ */
+export function sweep(solver: Solver, min: number, max: number): SweepResult {
+  const net = solver.net;
+  const count = net.comparators.length + net.diodes.length;
+  const result: SweepResult = { flips: [], segments: [], bands: [], initial: new Uint8Array(count) };
+  let state: State = new Uint8Array(count);
+  state = settle(solver, state, min, 'up', result, max);
+  result.initial = state.slice();
+  state = walk(solver, state, min, max, 'up', result);
+  walk(solver, state, max, min, 'down', result);
+  return result;
+}
+
+function walk(solver: Solver, start: State, from: number, to: number, dir: Direction, out: SweepResult): State {
+  const sign = dir === 'up' ? 1 : -1;
+  let state = start;
+  let x = from;
+  const limit = 4 * (state.length + 2) * (state.length + 2) + 16;
+  for (let step = 0; step < limit; step++) {
+    const sol = solver.solve(state);
+    let next = to;
+    for (let k = 0; k < state.length; k++) {
+      const [a, b] = margin(solver.net, sol, state, k);
+      if (b * sign >= 0) continue;
+      const xz = -a / b;
+      // An element already at its edge was flipped by settle; only strictly later crossings count.
+      if ((xz - x) * sign <= 0) continue;
+      if ((xz - next) * sign < 0) next = xz;
+    }
+    if ((next - x) * sign > 0) pushSegment(out, dir, x, next, state);
+    if (next === to) return state;
+    x = next;
+    state = settle(solver, state, x, dir, out, to);
+    const band = out.bands[out.bands.length - 1];
+    if (band && band.direction === dir && band.from === x) {
+      if (band.to === to) return state;
+      x = band.to;
+    }
+  }
+  return state;
+}
+
+function pushSegment(out: SweepResult, dir: Direction, a: number, b: number, state: State): void {
+  const last = out.segments[out.segments.length - 1];
+  const from = Math.min(a, b);
+  const to = Math.max(a, b);
+  if (last && last.direction === dir && stateKey(last.state) === stateKey(state)) {
+    last.from = Math.min(last.from, from);
+    last.to = Math.max(last.to, to);
+    return;
+  }
+  out.segments.push({ direction: dir, from, to, state: state.slice() });
+}
+
+/**
+ * Flips the most violated element until the state is consistent just past x. A repeated state is a
+ * cycle: the band with no stable state is recorded and the sweep resumes where a cycle state becomes
+ * consistent again.
+ */
+function settle(solver: Solver, start: State, x: number, dir: Direction, out: SweepResult, to: number): State {
+  const sign = dir === 'up' ? 1 : -1;
+  const net = solver.net;
+  const nc = net.comparators.length;
+  const seen: string[] = [];
+  let state = start.slice();
+  const limit = 4 * state.length + 8;
+  for (let step = 0; step <= limit; step++) {
+    const key = stateKey(state);
+    const repeat = seen.indexOf(key);
+    if (repeat >= 0) return escapeBand(solver, seen.slice(repeat), x, dir, out, to);
+    seen.push(key);
+    const sol = solver.solve(state);
+    let worst = -1;
+    let amount = 0;
+    for (let k = 0; k < state.length; k++) {
+      const [a, b] = margin(net, sol, state, k);
+      const v = violation(a, b, x, sign);
+      if (v > amount) {
+        amount = v;
+        worst = k;
+      }
+    }
+    if (worst < 0) return state;
+    let pinPlus = 0;
+    let pinMinus = 0;
+    if (worst < nc) {
+      const c = net.comparators[worst];
+      const [p0, p1] = nodeAffine(sol, c.plus);
+      const [m0, m1] = nodeAffine(sol, c.minus);
+      pinPlus = p0 + p1 * x;
+      pinMinus = m0 + m1 * x;
+    }
+    state[worst] = state[worst] ? 0 : 1;
+    out.flips.push({ element: worst, to: state[worst] === 1, x, direction: dir, pinPlus, pinMinus });
+  }
+  return state;
+}
+
+function escapeBand(solver: Solver, cycle: string[], x: number, dir: Direction, out: SweepResult, to: number): State {
+  const sign = dir === 'up' ? 1 : -1;
+  const states = cycle.map((key) => Uint8Array.from(key, (ch) => (ch === '1' ? 1 : 0)));
+  const elements: number[] = [];
+  for (let k = 0; k < states[0].length; k++) {
+    if (states.some((s) => s[k] !== states[0][k])) elements.push(k);
+  }
+  let bestX = to;
+  let best = states[0];
+  for (const s of states) {
+    const sol = solver.solve(s);
+    // The state is consistent on the interval where every margin is >= 0; find where that starts.
+    let lo = -Infinity;
+    let hi = Infinity;
+    for (let k = 0; k < s.length; k++) {
+      const [a, b] = margin(solver.net, sol, s, k);
+      if (b === 0) {
+        if (a < 0) lo = Infinity;
+        continue;
+      }
+      const xz = -a / b;
+      if (b > 0) lo = Math.max(lo, xz);
+      else hi = Math.min(hi, xz);
+    }
+    if (lo > hi) continue;
+    const enter = sign > 0 ? lo : hi;
+    const candidate = (enter - x) * sign > 0 ? enter : null;
+    if (candidate !== null && (candidate - bestX) * sign < 0) {
+      bestX = candidate;
+      best = s;
+    }
+  }
+  out.bands.push({ direction: dir, from: x, to: bestX, elements });
+  return best.slice();
+}
