@@ -1,7 +1,7 @@
 import { GND, type Network } from './types';
 
 /** Conductance from every node to ground that keeps floating nodes defined (S). */
-export const GMIN = 1e-12;
+export const GMIN = 1e-15;
 
 /**
  * The state of every switching element: one flag per comparator (true = output sinking, "low")
