@@ -1,0 +1,64 @@
+/**
+ * The spread model of a design (its nominal network and uncertain parameters) and the lean
+ * evaluation shared by Monte Carlo and worst case: perturb, sweep, read each channel's first rising
+ * and first falling transition. No checks, no report: only what spread needs.
+ */
+import type { Design } from '../design/types';
+import { buildNetwork } from '../network/build';
+import { Solver } from '../network/solve';
+import type { Network } from '../network/types';
+import { sweep } from '../sweep';
+import { type Parameter, perturbNetwork, spreadParameters, type SpreadOptions } from './perturb';
+
+/** A design ready for spread evaluation. Plain data: it can be rebuilt in a worker from the design. */
+export interface SpreadModel {
+  design: Design;
+  /** Nominal network (nominal part values, nominal supply). */
+  net: Network;
+  params: Parameter[];
+  /** Channel ids in network order; trip arrays use this order. */
+  channels: string[];
+}
+
+/** Trip points of one evaluation, per channel in model order (unit of x; NaN when absent). */
+export interface TripSample {
+  rising: Float64Array;
+  falling: Float64Array;
+  /** True when the sweep found a band with no stable state. */
+  chatter: boolean;
+}
+
+/** Builds the spread model of `design` with `options` (SpreadOptions). Pure. */
+export function buildSpreadModel(design: Design, options: SpreadOptions = {}): SpreadModel {
+  const net = buildNetwork(design);
+  return { design, net, params: spreadParameters(design, net, options), channels: net.comparators.map((c) => c.id) };
+}
+
+/**
+ * Sweeps `net` over the design's range and writes each comparator's first rising and first falling
+ * transition into `rising`/`falling` at `offset + k` (unit of x; NaN when the channel never flips).
+ * Returns true when a band with no stable state was found.
+ */
+export function sweepTrips(design: Design, net: Network, rising: Float64Array, falling: Float64Array, offset = 0): boolean {
+  const nc = net.comparators.length;
+  const result = sweep(new Solver(net), design.quantity.min, design.quantity.max);
+  for (let k = 0; k < nc; k++) {
+    rising[offset + k] = NaN;
+    falling[offset + k] = NaN;
+  }
+  for (const f of result.flips) {
+    if (f.element >= nc) continue;
+    const arr = f.direction === 'up' ? rising : falling;
+    if (Number.isNaN(arr[offset + f.element])) arr[offset + f.element] = f.x;
+  }
+  return result.bands.length > 0;
+}
+
+/** Evaluates the model at the unit point `units` (one value in [-1, 1] per parameter). */
+export function evaluateAt(model: SpreadModel, units: ArrayLike<number>): TripSample {
+  const n = model.channels.length;
+  const rising = new Float64Array(n);
+  const falling = new Float64Array(n);
+  const chatter = sweepTrips(model.design, perturbNetwork(model.net, model.params, units), rising, falling);
+  return { rising, falling, chatter };
+}
