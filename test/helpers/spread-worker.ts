@@ -1,0 +1,27 @@
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+let built: string | null = null;
+
+/**
+ * Bundles src/workers/spread-worker.ts with esbuild into a temporary ES module and returns its path,
+ * so worker threads can run from the TypeScript sources under vitest. Built once per process.
+ */
+export async function buildSpreadWorker(): Promise<string> {
+  if (built) return built;
+  const esbuild = await import('esbuild');
+  const outfile = join(mkdtempSync(join(tmpdir(), 'tapline-worker-')), 'spread-worker.mjs');
+  esbuild.buildSync({
+    entryPoints: [fileURLToPath(new URL('../../src/workers/spread-worker.ts', import.meta.url))],
+    bundle: true,
+    platform: 'node',
+    format: 'esm',
+    target: 'node20',
+    outfile,
+    logLevel: 'silent',
+  });
+  built = outfile;
+  return outfile;
+}
