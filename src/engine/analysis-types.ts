@@ -76,7 +76,7 @@ export interface Segment {
   to: number;
   /** Output state per channel id: true = sinking (low). */
   low: Record<string, boolean>;
-  /** Conduction per LED (keyed by channel id): true = lit. */
+  /** Per LED (keyed by channel id): lit, i.e. carrying at least LIT_CURRENT at the middle of the stretch. */
   lit: Record<string, boolean>;
 }
 
@@ -97,7 +97,7 @@ export interface ProbeResult {
   nodes: Record<string, number>;
   /** Output sinking per channel id. */
   low: Record<string, boolean>;
-  /** LED lit per channel id. */
+  /** LED lit (carrying at least LIT_CURRENT) per channel id. */
   lit: Record<string, boolean>;
   /** Current drawn from the supply rail, including part quiescent current (A). */
   supplyCurrent: number;

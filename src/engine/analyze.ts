@@ -21,7 +21,7 @@ export function analyze(design: Design, prepared: Prepared = prepare(design)): A
       from: s.from,
       to: s.to,
       low: Object.fromEntries(p.net.comparators.map((c, k) => [c.id, s.state[k] === 1])),
-      lit: litMap(p, s.state),
+      lit: litMap(p, s.state, (s.from + s.to) / 2),
     })),
     chatter: p.sweep.bands.map((b) => ({
       direction: b.direction,
@@ -55,45 +55,75 @@ export interface SegmentStats {
 function segmentStats(p: Prepared): SegmentStats {
   const { net } = p;
   const nc = net.comparators.length;
+  const nn = net.nodes.length;
+  const vmin = new Float64Array(nn).fill(Infinity);
+  const vmax = new Float64Array(nn).fill(-Infinity);
+  const power = new Float64Array(net.resistors.length);
+  const ledPower = new Float64Array(net.diodes.length);
+  const ledMax = new Float64Array(net.diodes.length);
+  const sinkMax = new Float64Array(nc);
+  const supply = { min: Infinity, minAt: 0, max: -Infinity, maxAt: 0 };
+  const samples: SegmentStats['samples'] = [];
+  for (const seg of p.sweep.segments) {
+    const sol = p.solver.solve(seg.state);
+    const { v0, v1 } = sol;
+    for (let e = 0; e < 2; e++) {
+      const x = e === 0 ? seg.from : seg.to;
+      samples.push({ x, sol, state: seg.state });
+      const i = supplyCurrentAt(p, sol, x);
+      if (i < supply.min) {
+        supply.min = i;
+        supply.minAt = x;
+      }
+      if (i > supply.max) {
+        supply.max = i;
+        supply.maxAt = x;
+      }
+      for (let k = 0; k < nn; k++) {
+        const v = v0[k] + v1[k] * x;
+        if (v < vmin[k]) vmin[k] = v;
+        if (v > vmax[k]) vmax[k] = v;
+      }
+      for (let k = 0; k < net.resistors.length; k++) {
+        const r = net.resistors[k];
+        const v = voltAt(sol, r.a, x) - voltAt(sol, r.b, x);
+        const w = (v * v) / r.ohms;
+        if (w > power[k]) power[k] = w;
+      }
+      for (let k = 0; k < nc; k++) {
+        if (!seg.state[k]) continue;
+        const c = net.comparators[k];
+        const sink = (voltAt(sol, c.out, x) - c.vsat0) / c.rsat;
+        if (sink > sinkMax[k]) sinkMax[k] = sink;
+      }
+      for (let k = 0; k < net.diodes.length; k++) {
+        if (!seg.state[nc + k]) continue;
+        const d = net.diodes[k];
+        const current = diodeCurrent(sol, d, x);
+        if (current > ledMax[k]) ledMax[k] = current;
+        if (current * current * d.rSeries > ledPower[k]) ledPower[k] = current * current * d.rSeries;
+      }
+    }
+  }
   const st: SegmentStats = {
-    supply: { min: Infinity, minAt: 0, max: -Infinity, maxAt: 0 },
+    supply: Number.isFinite(supply.min) ? supply : { min: 0, minAt: 0, max: 0, maxAt: 0 },
     nodeMin: {},
     nodeMax: {},
     dissipation: {},
-    sinkMax: Object.fromEntries(net.comparators.map((c) => [c.id, 0])),
+    sinkMax: {},
     ledMax: {},
-    samples: [],
+    samples,
   };
-  for (const seg of p.sweep.segments) {
-    const sol = p.solver.solve(seg.state);
-    for (const x of [seg.from, seg.to]) {
-      st.samples.push({ x, sol, state: seg.state });
-      const i = supplyCurrentAt(p, sol, x);
-      if (i < st.supply.min) Object.assign(st.supply, { min: i, minAt: x });
-      if (i > st.supply.max) Object.assign(st.supply, { max: i, maxAt: x });
-      net.nodes.forEach((name, k) => {
-        const v = voltAt(sol, k, x);
-        st.nodeMin[name] = Math.min(st.nodeMin[name] ?? Infinity, v);
-        st.nodeMax[name] = Math.max(st.nodeMax[name] ?? -Infinity, v);
-      });
-      for (const r of net.resistors) {
-        const v = voltAt(sol, r.a, x) - voltAt(sol, r.b, x);
-        st.dissipation[r.id] = Math.max(st.dissipation[r.id] ?? 0, (v * v) / r.ohms);
-      }
-      net.comparators.forEach((c, k) => {
-        if (!seg.state[k]) return;
-        const sink = (voltAt(sol, c.out, x) - c.vsat0) / c.rsat;
-        st.sinkMax[c.id] = Math.max(st.sinkMax[c.id], sink);
-      });
-      net.diodes.forEach((d, k) => {
-        const on = seg.state[nc + k] === 1;
-        const current = on ? diodeCurrent(sol, d, x) : 0;
-        if (d.channel) st.ledMax[d.channel] = Math.max(st.ledMax[d.channel] ?? 0, current);
-        if (d.seriesId) st.dissipation[d.seriesId] = Math.max(st.dissipation[d.seriesId] ?? 0, current * current * d.rSeries);
-      });
-    }
-  }
-  if (!Number.isFinite(st.supply.min)) st.supply = { min: 0, minAt: 0, max: 0, maxAt: 0 };
+  net.nodes.forEach((name, k) => {
+    st.nodeMin[name] = Number.isFinite(vmin[k]) ? vmin[k] : 0;
+    st.nodeMax[name] = Number.isFinite(vmax[k]) ? vmax[k] : 0;
+  });
+  net.resistors.forEach((r, k) => (st.dissipation[r.id] = power[k]));
+  net.comparators.forEach((c, k) => (st.sinkMax[c.id] = sinkMax[k]));
+  net.diodes.forEach((d, k) => {
+    if (d.channel) st.ledMax[d.channel] = ledMax[k];
+    if (d.seriesId) st.dissipation[d.seriesId] = ledPower[k];
+  });
   return st;
 }
 
@@ -136,11 +166,19 @@ function tapResults(p: Prepared, st: SegmentStats): TapResult[] {
   }));
 }
 
-function litMap(p: Prepared, state: Uint8Array): Record<string, boolean> {
+/**
+ * LED current from which an indicator counts as lit (A). Below it an LED may still conduct, e.g. the
+ * few microamperes an open output leaks through its feedback resistor: a faint glow, not a reading.
+ * Common practice, no source: indicator LEDs read as plainly on from about half a milliampere.
+ */
+export const LIT_CURRENT = 0.5e-3;
+
+function litMap(p: Prepared, state: Uint8Array, x: number): Record<string, boolean> {
   const nc = p.net.comparators.length;
+  const sol = p.solver.solve(state);
   const lit: Record<string, boolean> = {};
   p.net.diodes.forEach((d, k) => {
-    if (d.channel) lit[d.channel] = state[nc + k] === 1;
+    if (d.channel) lit[d.channel] = state[nc + k] === 1 && diodeCurrent(sol, d, x) >= LIT_CURRENT;
   });
   return lit;
 }
@@ -170,5 +208,5 @@ export function probe(p: Prepared, x: number, direction: Direction): ProbeResult
   p.net.diodes.forEach((d, k) => {
     if (d.channel) ledCurrent[d.channel] = state[nc + k] ? diodeCurrent(sol, d, x) : 0;
   });
-  return { x, direction, nodes, low, lit: litMap(p, state), supplyCurrent: supplyCurrentAt(p, sol, x), sinkCurrent, ledCurrent };
+  return { x, direction, nodes, low, lit: litMap(p, state, x), supplyCurrent: supplyCurrentAt(p, sol, x), sinkCurrent, ledCurrent };
 }

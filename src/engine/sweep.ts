@@ -1,5 +1,4 @@
-import { nodeAffine, type Solution, Solver, type State, stateKey } from './network/solve';
-import type { Network } from './network/types';
+import { nodeAffine, Solver, type State, stateKey } from './network/solve';
 
 /** Sweep direction: x rising or falling. */
 export type Direction = 'up' | 'down';
@@ -47,29 +46,6 @@ export interface SweepResult {
 /** Numerical zero for margins (V). */
 const TOL = 1e-12;
 
-/**
- * Margin of element `k` in `state` as the affine pair [a, b] (V): the element's present state is
- * consistent while a + b·x >= 0.
- */
-export function margin(net: Network, sol: Solution, state: State, k: number): [number, number] {
-  const nc = net.comparators.length;
-  if (k < nc) {
-    const c = net.comparators[k];
-    const [m0, m1] = nodeAffine(sol, c.minus);
-    const [p0, p1] = nodeAffine(sol, c.plus);
-    // d = V(−) − V(+) − Vos > 0 wants the output low.
-    const d0 = m0 - p0 - c.vos;
-    const d1 = m1 - p1;
-    return state[k] ? [d0, d1] : [-d0, -d1];
-  }
-  const d = net.diodes[k - nc];
-  const [a0, a1] = nodeAffine(sol, d.anode);
-  const [c0, c1] = nodeAffine(sol, d.cathode);
-  const f0 = a0 - c0 - d.knee;
-  const f1 = a1 - c1;
-  return state[k] ? [f0, f1] : [-f0, -f1];
-}
-
 /** How badly element k's state is violated just past x in `dir` (0 when consistent). */
 function violation(a: number, b: number, x: number, sign: number): number {
   const m = a + b * x;
@@ -105,7 +81,9 @@ function walk(solver: Solver, start: State, from: number, to: number, dir: Direc
     const sol = solver.solve(state);
     let next = to;
     for (let k = 0; k < state.length; k++) {
-      const [a, b] = margin(solver.net, sol, state, k);
+      const flip = state[k] ? 1 : -1;
+      const a = sol.da[k] * flip;
+      const b = sol.db[k] * flip;
       if (b * sign >= 0) continue;
       const xz = -a / b;
       // An element already at its edge was flipped by settle; only strictly later crossings count.
@@ -158,8 +136,8 @@ function settle(solver: Solver, start: State, x: number, dir: Direction, out: Sw
     let worst = -1;
     let amount = 0;
     for (let k = 0; k < state.length; k++) {
-      const [a, b] = margin(net, sol, state, k);
-      const v = violation(a, b, x, sign);
+      const flip = state[k] ? 1 : -1;
+      const v = violation(sol.da[k] * flip, sol.db[k] * flip, x, sign);
       if (v > amount) {
         amount = v;
         worst = k;
@@ -196,7 +174,9 @@ function escapeBand(solver: Solver, cycle: string[], x: number, dir: Direction, 
     let lo = -Infinity;
     let hi = Infinity;
     for (let k = 0; k < s.length; k++) {
-      const [a, b] = margin(solver.net, sol, s, k);
+      const flip = s[k] ? 1 : -1;
+      const a = sol.da[k] * flip;
+      const b = sol.db[k] * flip;
       if (b === 0) {
         if (a < 0) lo = Infinity;
         continue;

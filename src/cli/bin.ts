@@ -1,0 +1,24 @@
+#!/usr/bin/env node
+import { main } from './main';
+import type { CliIo } from './io';
+
+const io: CliIo = {
+  out: (text) => void process.stdout.write(text),
+  err: (text) => void process.stderr.write(text),
+  isTty: Boolean(process.stdout.isTTY && process.stdin.isTTY),
+  cwd: process.cwd(),
+  env: process.env,
+};
+
+// The interactive screen is loaded only when asked for, so `check` and friends start fast.
+const openTui = async (file: string | undefined, cliIo: CliIo) => (await import('../ui/run')).openTui(file, cliIo);
+
+main(process.argv.slice(2), io, openTui).then(
+  (code) => {
+    process.exitCode = code;
+  },
+  (error: unknown) => {
+    process.stderr.write(`tapline: internal error: ${error instanceof Error ? error.message : String(error)}\nPlease report it with the design file that caused it.\n`);
+    process.exitCode = 70;
+  },
+);
