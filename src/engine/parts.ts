@@ -106,13 +106,18 @@ export const BUILTIN_PARTS: Readonly<Record<string, PartClass>> = Object.freeze(
 /** The fields of a part class a design file may override (everything except its id). */
 export type PartOverrides = Partial<Omit<PartClass, 'id'>>;
 
+/** Note shown beside the typical and maximum figures of the built-in classes. */
+export const PART_VALUES_NOTE = 'from memory, check your datasheet';
+
 /**
- * The built-in class `id` with `overrides` applied (SI units, as in `PartClass`), or `undefined`
- * when no built-in class has that id. Undefined override fields are ignored.
+ * The class `id` with `overrides` applied (SI units, as in `PartClass`), or `undefined` when no class
+ * has that id. Built-in classes come first; `extra` adds user classes (kept by the store) by id.
+ * Undefined override fields are ignored.
  */
-export function resolvePart(id: string, overrides: PartOverrides = {}): PartClass | undefined {
-  if (!Object.hasOwn(BUILTIN_PARTS, id)) return undefined;
-  const part: PartClass = { ...BUILTIN_PARTS[id] };
+export function resolvePart(id: string, overrides: PartOverrides = {}, extra: Readonly<Record<string, PartClass>> = {}): PartClass | undefined {
+  const base = Object.hasOwn(BUILTIN_PARTS, id) ? BUILTIN_PARTS[id] : Object.hasOwn(extra, id) ? extra[id] : undefined;
+  if (!base) return undefined;
+  const part: PartClass = { ...base, id };
   for (const [key, value] of Object.entries(overrides)) {
     if (value !== undefined && key !== 'id') (part as unknown as Record<string, unknown>)[key] = value;
   }
