@@ -1,0 +1,93 @@
+import { basename, resolve } from 'node:path';
+import { parseArgs } from 'node:util';
+import { designToFile } from '../../engine/design/save';
+import { plan } from '../../engine/planner/index';
+import { readDesignFile, writeFileAtomic } from '../../store/files';
+import { EXIT, type CliIo, type Command } from '../io';
+import { planReport } from '../report/plan-report';
+
+const USAGE = `Usage: tapline plan FILE [--out FILE] [--in-place] [--json] [--ascii]
+
+Turns the targets in FILE into a realised design: channels placed on quad packages, every resistor
+sized, closed against the exact sweep and snapped to the chosen E-series. Prints the package map,
+the values and target vs realised for every trip point. Writes the realised design to FILE with
+".planned.tapline.json" instead of ".tapline.json" unless --out names another file. Exit 0 when
+every target is met, 1 when one cannot be met, 2 when FILE cannot be read.
+
+Options:
+  --out FILE   write the realised design here
+  --in-place   allow the output to be the input file itself (overwrites it)
+  --json       print a machine-readable document instead of the report
+  --ascii      plain ASCII (no µ, Ω or box characters)
+  -h, --help
+`;
+
+/** Default output path: `x.tapline.json` → `x.planned.tapline.json`, `x.json` → `x.planned.tapline.json`. */
+export function plannedName(path: string): string {
+  const stem = path.replace(/\.tapline\.json$/i, '').replace(/\.json$/i, '');
+  return `${stem}.planned.tapline.json`;
+}
+
+/** `tapline plan FILE`: plans the targets and writes the realised design. */
+export const planCommand: Command = {
+  name: 'plan',
+  summary: 'turn targets into a realised design',
+  usage: 'tapline plan FILE [--out FILE] [--json]',
+  async run(args: string[], io: CliIo): Promise<number> {
+    let parsed;
+    try {
+      parsed = parseArgs({
+        args,
+        allowPositionals: true,
+        options: {
+          out: { type: 'string' },
+          'in-place': { type: 'boolean' },
+          json: { type: 'boolean' },
+          ascii: { type: 'boolean' },
+          help: { type: 'boolean', short: 'h' },
+        },
+      });
+    } catch (e) {
+      io.err(`tapline plan: ${(e as Error).message}\n${USAGE}`);
+      return EXIT.input;
+    }
+    const v = parsed.values;
+    if (v.help) {
+      io.out(USAGE);
+      return EXIT.ok;
+    }
+    if (parsed.positionals.length !== 1) {
+      io.err(`tapline plan: give exactly one design file (got ${parsed.positionals.length}).\n${USAGE}`);
+      return EXIT.input;
+    }
+    const input = resolve(io.cwd, parsed.positionals[0]);
+    const output = v.out !== undefined ? resolve(io.cwd, v.out) : v['in-place'] ? input : plannedName(input);
+    if (output === input && !v['in-place']) {
+      io.err(`tapline plan: --out ${v.out} is the input file; add --in-place to overwrite it, or name another file.\n`);
+      return EXIT.input;
+    }
+    const read = await readDesignFile(input);
+    if (!read.ok) {
+      io.err(`${read.message}\n`);
+      return EXIT.input;
+    }
+    const result = plan(read.design);
+    let written: string | null = null;
+    if (result.rows.length) {
+      try {
+        await writeFileAtomic(output, `${JSON.stringify(designToFile(result.design), null, 2)}\n`);
+        written = output;
+      } catch (e) {
+        io.err(`tapline plan: cannot write ${output}: ${(e as Error).message}. Choose another --out.\n`);
+        return EXIT.input;
+      }
+    }
+    if (v.json) {
+      const { design: _design, ...rest } = result;
+      io.out(`${JSON.stringify({ ...rest, output: written }, null, 2)}\n`);
+    } else {
+      io.out(planReport(result, { ascii: v.ascii ?? false, output: written ? basename(written) : null }));
+    }
+    return result.ok ? EXIT.ok : EXIT.findings;
+  },
+};
