@@ -23,71 +23,102 @@ export interface Solution {
    */
   da: Float64Array;
   db: Float64Array;
-  /** False when the matrix was singular for this state (a loop of ideal sources). */
+  /** False when the system could not be solved for this state. */
   ok: boolean;
+}
+
+/** A two-terminal branch: current from a to b = g·(V(a) − V(b) − e). */
+interface Branch {
+  a: number;
+  b: number;
+  g: number;
+  e: number;
 }
 
 /**
  * A network prepared for repeated solves. Nodes held by a voltage source are known (affine in x),
  * so only the remaining nodes are unknowns; their conductance matrix is symmetric positive definite
- * and is solved by Cholesky factorisation. State-independent stamps are assembled once, and solutions
- * are cached per state so a sweep that revisits a state pays nothing.
+ * and is solved by Cholesky factorisation (pivoting LU as the fallback). The state-independent part
+ * is stamped once; each state adds only its own branches. Solutions are cached per state.
  */
 export class Solver {
   readonly net: Network;
   /** Node count. */
   readonly size: number;
-  private readonly base: Float64Array;
+  /** Unknown index of every node, or -1 when a source holds it. */
+  private readonly slot: Int32Array;
+  private readonly unknowns: Int32Array;
+  private readonly held0: Float64Array;
+  private readonly held1: Float64Array;
+  private readonly isHeld: Uint8Array;
+  private readonly baseA: Float64Array;
+  private readonly baseR0: Float64Array;
+  private readonly baseR1: Float64Array;
   private readonly inj0: Float64Array;
   private readonly inj1: Float64Array;
-  private readonly full: Float64Array;
-  /** Unknown node indices, and for every node its unknown index or -1 when a source holds it. */
-  private readonly unknowns: Int32Array;
-  private readonly slot: Int32Array;
-  private readonly reduced: Float64Array;
+  /** Fixed branches touching a held node, for the source currents. */
+  private readonly heldBranches: Branch[] = [];
+  /** Per element: the branch it adds when its flag is set (comparator low, diode on) or clear (push-pull high). */
+  private readonly onBranch: (Branch | null)[] = [];
+  private readonly offBranch: (Branch | null)[] = [];
+  private readonly work: Float64Array;
   private readonly cache = new Map<number | string, Solution>();
-  /** Held nodes and their source coefficients, flattened for the inner loops. */
-  private readonly heldNode: Int32Array;
-  private readonly heldC0: Float64Array;
-  private readonly heldC1: Float64Array;
 
   constructor(net: Network) {
     this.net = net;
     const n = net.nodes.length;
     this.size = n;
-    this.base = new Float64Array(n * n);
-    this.full = new Float64Array(n * n);
-    this.inj0 = new Float64Array(n);
-    this.inj1 = new Float64Array(n);
-    for (let k = 0; k < n; k++) this.base[k * n + k] += GMIN;
-    for (const r of net.resistors) this.conductance(this.base, r.a, r.b, 1 / r.ohms);
-    for (const s of net.isources) {
-      if (s.from !== GND) {
-        this.inj0[s.from] -= s.c0;
-        this.inj1[s.from] -= s.c1;
-      }
-      if (s.to !== GND) {
-        this.inj0[s.to] += s.c0;
-        this.inj1[s.to] += s.c1;
-      }
+    this.held0 = new Float64Array(n);
+    this.held1 = new Float64Array(n);
+    this.isHeld = new Uint8Array(n);
+    for (const s of net.vsources) {
+      this.isHeld[s.node] = 1;
+      this.held0[s.node] = s.c0;
+      this.held1[s.node] = s.c1;
     }
-    for (const c of net.comparators) {
-      if (c.plus !== GND) this.inj0[c.plus] += c.ibPlus;
-      if (c.minus !== GND) this.inj0[c.minus] += c.ibMinus;
-    }
-    const held = new Set(net.vsources.map((v) => v.node));
-    const list: number[] = [];
     this.slot = new Int32Array(n).fill(-1);
+    const list: number[] = [];
     for (let k = 0; k < n; k++) {
-      if (held.has(k)) continue;
+      if (this.isHeld[k]) continue;
       this.slot[k] = list.length;
       list.push(k);
     }
     this.unknowns = Int32Array.from(list);
-    this.heldNode = Int32Array.from(net.vsources, (v) => v.node);
-    this.heldC0 = Float64Array.from(net.vsources, (v) => v.c0);
-    this.heldC1 = Float64Array.from(net.vsources, (v) => v.c1);
-    this.reduced = new Float64Array(list.length * list.length);
+    const nu = list.length;
+    this.baseA = new Float64Array(nu * nu);
+    this.work = new Float64Array(nu * nu);
+    this.baseR0 = new Float64Array(nu);
+    this.baseR1 = new Float64Array(nu);
+    this.inj0 = new Float64Array(n);
+    this.inj1 = new Float64Array(n);
+    for (let i = 0; i < nu; i++) this.baseA[i * nu + i] += GMIN;
+    for (const s of net.isources) {
+      this.inject(s.from, -s.c0, -s.c1);
+      this.inject(s.to, s.c0, s.c1);
+    }
+    for (const c of net.comparators) {
+      this.inject(c.plus, c.ibPlus, 0);
+      this.inject(c.minus, c.ibMinus, 0);
+    }
+    for (let k = 0; k < n; k++) {
+      const s = this.slot[k];
+      if (s < 0) continue;
+      this.baseR0[s] += this.inj0[k];
+      this.baseR1[s] += this.inj1[k];
+    }
+    for (const r of net.resistors) {
+      const br = { a: r.a, b: r.b, g: 1 / r.ohms, e: 0 };
+      this.stamp(this.baseA, this.baseR0, this.baseR1, br);
+      if (this.touchesHeld(br)) this.heldBranches.push(br);
+    }
+    for (const c of net.comparators) {
+      this.onBranch.push({ a: c.out, b: GND, g: 1 / c.rsat, e: c.vsat0 });
+      this.offBranch.push(c.pushPull ? { a: c.out, b: net.supply, g: 1 / c.rout, e: -c.vohDrop } : null);
+    }
+    for (const d of net.diodes) {
+      this.onBranch.push({ a: d.anode, b: d.cathode, g: 1 / (d.rSeries + d.rdyn), e: d.knee });
+      this.offBranch.push(null);
+    }
   }
 
   /** Solves the network in `state`, from the cache when it has been solved before. */
@@ -100,92 +131,76 @@ export class Solver {
     return sol;
   }
 
-  private conductance(m: Float64Array, a: number, b: number, g: number): void {
-    const n = this.size;
-    if (a !== GND) m[a * n + a] += g;
-    if (b !== GND) m[b * n + b] += g;
-    if (a !== GND && b !== GND) {
-      m[a * n + b] -= g;
-      m[b * n + a] -= g;
+  private inject(node: number, i0: number, i1: number): void {
+    if (node === GND) return;
+    this.inj0[node] += i0;
+    this.inj1[node] += i1;
+  }
+
+  private touchesHeld(br: Branch): boolean {
+    return (br.a !== GND && this.isHeld[br.a] === 1) || (br.b !== GND && this.isHeld[br.b] === 1);
+  }
+
+  /** Adds a branch to the reduced system: held node voltages move to the right-hand sides. */
+  private stamp(m: Float64Array, r0: Float64Array, r1: Float64Array, br: Branch): void {
+    const nu = this.unknowns.length;
+    const sa = br.a === GND ? -1 : this.slot[br.a];
+    const sb = br.b === GND ? -1 : this.slot[br.b];
+    const { g, e } = br;
+    if (sa >= 0) {
+      m[sa * nu + sa] += g;
+      r0[sa] += g * e;
+      if (sb >= 0) m[sa * nu + sb] -= g;
+      else if (br.b !== GND) {
+        r0[sa] += g * this.held0[br.b];
+        r1[sa] += g * this.held1[br.b];
+      }
+    }
+    if (sb >= 0) {
+      m[sb * nu + sb] += g;
+      r0[sb] -= g * e;
+      if (sa >= 0) m[sb * nu + sa] -= g;
+      else if (br.a !== GND) {
+        r0[sb] += g * this.held0[br.a];
+        r1[sb] += g * this.held1[br.a];
+      }
     }
   }
 
   private factorAndSolve(state: State): Solution {
     const { net, size: n } = this;
-    const g = this.full;
-    g.set(this.base);
-    const b0 = Float64Array.from(this.inj0);
-    const b1 = Float64Array.from(this.inj1);
-    const nc = net.comparators.length;
-    for (let k = 0; k < nc; k++) {
-      const c = net.comparators[k];
-      if (state[k]) {
-        this.conductance(g, c.out, GND, 1 / c.rsat);
-        b0[c.out] += c.vsat0 / c.rsat;
-      } else if (c.pushPull) {
-        const gc = 1 / c.rout;
-        this.conductance(g, c.out, net.supply, gc);
-        b0[c.out] -= c.vohDrop * gc;
-        b0[net.supply] += c.vohDrop * gc;
-      }
+    const nu = this.unknowns.length;
+    const a = this.work;
+    a.set(this.baseA);
+    const r0 = Float64Array.from(this.baseR0);
+    const r1 = Float64Array.from(this.baseR1);
+    const active: Branch[] = [];
+    for (let k = 0; k < state.length; k++) {
+      const br = state[k] ? this.onBranch[k] : this.offBranch[k];
+      if (!br) continue;
+      this.stamp(a, r0, r1, br);
+      active.push(br);
     }
-    for (let k = 0; k < net.diodes.length; k++) {
-      if (!state[nc + k]) continue;
-      const d = net.diodes[k];
-      const gd = 1 / (d.rSeries + d.rdyn);
-      this.conductance(g, d.anode, d.cathode, gd);
-      if (d.anode !== GND) b0[d.anode] += gd * d.knee;
-      if (d.cathode !== GND) b0[d.cathode] -= gd * d.knee;
+    let ok = choleskySolve2(a, nu, r0, r1);
+    if (!ok) {
+      a.set(this.baseA);
+      r0.set(this.baseR0);
+      r1.set(this.baseR1);
+      for (const br of active) this.stamp(a, r0, r1, br);
+      ok = luSolve2(a, nu, r0, r1);
     }
-    // Known node voltages from the sources, then the reduced system for the unknown nodes.
     const m = net.vsources.length;
     const v0 = new Float64Array(n + m);
     const v1 = new Float64Array(n + m);
-    const hn = this.heldNode;
-    const h0 = this.heldC0;
-    const h1 = this.heldC1;
-    for (let j = 0; j < m; j++) {
-      v0[hn[j]] = h0[j];
-      v1[hn[j]] = h1[j];
+    for (let k = 0; k < n; k++) {
+      const s = this.slot[k];
+      v0[k] = s < 0 ? this.held0[k] : r0[s];
+      v1[k] = s < 0 ? this.held1[k] : r1[s];
     }
-    const u = this.unknowns;
-    const nu = u.length;
-    const a = this.reduced;
-    const r0 = new Float64Array(nu);
-    const r1 = new Float64Array(nu);
-    for (let i = 0; i < nu; i++) {
-      const row = u[i] * n;
-      let s0 = b0[u[i]];
-      let s1 = b1[u[i]];
-      for (let j = 0; j < m; j++) {
-        const gk = g[row + hn[j]];
-        s0 -= gk * h0[j];
-        s1 -= gk * h1[j];
-      }
-      r0[i] = s0;
-      r1[i] = s1;
-      for (let j = 0; j < nu; j++) a[i * nu + j] = g[row + u[j]];
-    }
-    const ok = choleskySolve2(a, nu, r0, r1) || luSolve2(this.refill(a, g), nu, r0, r1);
-    for (let i = 0; i < nu; i++) {
-      v0[u[i]] = r0[i];
-      v1[u[i]] = r1[i];
-    }
-    // Current each source delivers: what leaves its node through the network minus injections.
-    net.vsources.forEach((s, j) => {
-      const row = s.node * n;
-      let i0 = -b0[s.node];
-      let i1 = -b1[s.node];
-      for (let k = 0; k < n; k++) {
-        i0 += g[row + k] * v0[k];
-        i1 += g[row + k] * v1[k];
-      }
-      v0[n + j] = i0;
-      v1[n + j] = i1;
-    });
-    const count = nc + net.diodes.length;
-    const da = new Float64Array(count);
-    const db = new Float64Array(count);
+    this.sourceCurrents(v0, v1, active);
+    const nc = net.comparators.length;
+    const da = new Float64Array(state.length);
+    const db = new Float64Array(state.length);
     for (let k = 0; k < nc; k++) {
       const c = net.comparators[k];
       da[k] = at(v0, c.minus) - at(v0, c.plus) - c.vos;
@@ -199,58 +214,28 @@ export class Solver {
     return { v0, v1, da, db, ok };
   }
 
-  /** Rebuilds the reduced matrix (Cholesky overwrote it) for the pivoting fallback. */
-  private refill(a: Float64Array, g: Float64Array): Float64Array {
-    const u = this.unknowns;
+  /** Current each source delivers: what leaves its node through the branches minus injections. */
+  private sourceCurrents(v0: Float64Array, v1: Float64Array, active: Branch[]): void {
     const n = this.size;
-    for (let i = 0; i < u.length; i++) for (let j = 0; j < u.length; j++) a[i * u.length + j] = g[u[i] * n + u[j]];
-    return a;
+    this.net.vsources.forEach((s, j) => {
+      let i0 = -this.inj0[s.node];
+      let i1 = -this.inj1[s.node];
+      const add = (br: Branch) => {
+        const sign = br.a === s.node ? 1 : br.b === s.node ? -1 : 0;
+        if (!sign) return;
+        i0 += sign * br.g * (at(v0, br.a) - at(v0, br.b) - br.e);
+        i1 += sign * br.g * (at(v1, br.a) - at(v1, br.b));
+      };
+      for (const br of this.heldBranches) add(br);
+      for (const br of active) add(br);
+      v0[n + j] = i0;
+      v1[n + j] = i1;
+    });
   }
 }
 
 function at(vec: Float64Array, node: number): number {
   return node === GND ? 0 : vec[node];
-}
-
-/**
- * Cholesky factorisation of the symmetric positive definite `a` (size×size, row-major, lower
- * triangle used and overwritten), solving for two right-hand sides in place. Returns false when a
- * pivot is not positive; the right-hand sides are then untouched.
- */
-export function choleskySolve2(a: Float64Array, size: number, b0: Float64Array, b1: Float64Array): boolean {
-  for (let j = 0; j < size; j++) {
-    let d = a[j * size + j];
-    for (let k = 0; k < j; k++) d -= a[j * size + k] * a[j * size + k];
-    if (!(d > 0)) return false;
-    const l = Math.sqrt(d);
-    a[j * size + j] = l;
-    for (let i = j + 1; i < size; i++) {
-      let s = a[i * size + j];
-      for (let k = 0; k < j; k++) s -= a[i * size + k] * a[j * size + k];
-      a[i * size + j] = s / l;
-    }
-  }
-  for (let i = 0; i < size; i++) {
-    let s0 = b0[i];
-    let s1 = b1[i];
-    for (let k = 0; k < i; k++) {
-      s0 -= a[i * size + k] * b0[k];
-      s1 -= a[i * size + k] * b1[k];
-    }
-    b0[i] = s0 / a[i * size + i];
-    b1[i] = s1 / a[i * size + i];
-  }
-  for (let i = size - 1; i >= 0; i--) {
-    let s0 = b0[i];
-    let s1 = b1[i];
-    for (let k = i + 1; k < size; k++) {
-      s0 -= a[k * size + i] * b0[k];
-      s1 -= a[k * size + i] * b1[k];
-    }
-    b0[i] = s0 / a[i * size + i];
-    b1[i] = s1 / a[i * size + i];
-  }
-  return true;
 }
 
 /** Numeric key of a state of at most 52 elements (exact in a double). */
@@ -269,6 +254,50 @@ export function stateKey(state: State): string {
   let key = '';
   for (let k = 0; k < state.length; k++) key += state[k] ? '1' : '0';
   return key;
+}
+
+/**
+ * Cholesky factorisation of the symmetric positive definite `a` (size×size, row-major, lower
+ * triangle used and overwritten), solving for two right-hand sides in place. Returns false when a
+ * pivot is not positive.
+ */
+export function choleskySolve2(a: Float64Array, size: number, b0: Float64Array, b1: Float64Array): boolean {
+  for (let j = 0; j < size; j++) {
+    const rj = j * size;
+    let d = a[rj + j];
+    for (let k = 0; k < j; k++) d -= a[rj + k] * a[rj + k];
+    if (!(d > 0)) return false;
+    const l = Math.sqrt(d);
+    a[rj + j] = l;
+    for (let i = j + 1; i < size; i++) {
+      const ri = i * size;
+      let s = a[ri + j];
+      for (let k = 0; k < j; k++) s -= a[ri + k] * a[rj + k];
+      a[ri + j] = s / l;
+    }
+  }
+  for (let i = 0; i < size; i++) {
+    const ri = i * size;
+    let s0 = b0[i];
+    let s1 = b1[i];
+    for (let k = 0; k < i; k++) {
+      s0 -= a[ri + k] * b0[k];
+      s1 -= a[ri + k] * b1[k];
+    }
+    b0[i] = s0 / a[ri + i];
+    b1[i] = s1 / a[ri + i];
+  }
+  for (let i = size - 1; i >= 0; i--) {
+    let s0 = b0[i];
+    let s1 = b1[i];
+    for (let k = i + 1; k < size; k++) {
+      s0 -= a[k * size + i] * b0[k];
+      s1 -= a[k * size + i] * b1[k];
+    }
+    b0[i] = s0 / a[i * size + i];
+    b1[i] = s1 / a[i * size + i];
+  }
+  return true;
 }
 
 /**
