@@ -1,6 +1,6 @@
 import type { Analysis, Finding, Severity } from './analysis-types';
 import type { SegmentStats } from './analyze';
-import { type Prepared, voltAt } from './prepare';
+import { type Prepared, prepare, voltAt } from './prepare';
 import { formatEng } from './values';
 
 /** Resistor power rating assumed when the design names none (W): common practice, no source. */
@@ -112,14 +112,9 @@ function checkReference(p: Prepared, st: SegmentStats, a: Analysis, add: Add, fx
     if (p.design.supply.kind === 'measured' && p.design.input.signal === 'voltage') {
       add('error', 'ratiometric-measured', 'reference', null, '', 'The string runs from the supply, and the supply is the quantity being measured: every threshold moves with x, so the ladder cannot resolve it.',
         'Feed the string from a shunt or external reference.');
-    } else if (p.design.supply.kind === 'fixed' && p.design.supply.max > p.design.supply.min) {
-      const s = p.design.supply;
-      add('warning', 'ratiometric', 'reference', null, `±${formatEng(((s.max - s.min) / 2 / s.volts) * 100, '%', { digits: 2 })}`,
-        `The string runs from the supply, so thresholds on it move with the supply over ${formatEng(s.min, 'V')} to ${formatEng(s.max, 'V')}.`,
-        'Use a reference for the string, or accept the spread (see the spread report).');
     }
-    return;
   }
+  checkSupplyShift(p, a, add, fx);
   if (ref.kind !== 'shunt') return;
   const k = p.net.diodes.findIndex((d) => d.kind === 'shunt');
   let worst: { i: number; x: number } | null = null;
@@ -142,6 +137,44 @@ function checkReference(p: Prepared, st: SegmentStats, a: Analysis, add: Add, fx
       `The shunt reference carries ${formatEng(over.i, 'A')} at x = ${fx(over.x)}, over its ${formatEng(ref.maxCurrent, 'A')} rating.`,
       'Raise the bias resistor RB.');
   }
+}
+
+/**
+ * Thresholds that move with a fixed supply: re-sweeps at the supply's minimum and maximum and reports
+ * every trip point that moves by more than a tenth of its hysteresis (or 0.1 % of the x range when it
+ * has none).
+ */
+function checkSupplyShift(p: Prepared, a: Analysis, add: Add, fx: (x: number) => string): void {
+  const s = p.design.supply;
+  if (s.kind !== 'fixed' || !(s.max > s.min)) return;
+  const span = p.design.quantity.max - p.design.quantity.min;
+  const corners = [s.min, s.max].map((v) => analyzeTrips(prepare(p.design, { supplyVolts: v })));
+  for (const c of a.channels) {
+    let worst = 0;
+    for (const corner of corners) {
+      const o = corner.get(c.id);
+      if (!o) continue;
+      if (c.rising && o.rising !== null) worst = Math.max(worst, Math.abs(o.rising - c.rising.x));
+      if (c.falling && o.falling !== null) worst = Math.max(worst, Math.abs(o.falling - c.falling.x));
+    }
+    const allowed = c.hysteresis ? Math.abs(c.hysteresis) / 10 : span * 1e-3;
+    if (worst > allowed) {
+      add('warning', 'supply-dependent', c.id, c.rising?.x ?? null, `±${fx(worst)}`,
+        `The trip points of ${c.id} move by up to ${fx(worst)} as the supply goes from ${formatEng(s.min, 'V')} to ${formatEng(s.max, 'V')}.`,
+        p.design.reference.kind === 'supply' ? 'Feed the string from a reference instead of the supply.' : 'Take pull-ups and LED anodes that feed back into the string from a steadier rail, or raise the feedback resistors.');
+    }
+  }
+}
+
+/** First rising and falling trip point of each comparator from a prepared sweep. */
+function analyzeTrips(p: Prepared): Map<string, { rising: number | null; falling: number | null }> {
+  const out = new Map<string, { rising: number | null; falling: number | null }>();
+  p.net.comparators.forEach((c, k) => {
+    const up = p.sweep.flips.find((f) => f.element === k && f.direction === 'up');
+    const down = p.sweep.flips.find((f) => f.element === k && f.direction === 'down');
+    out.set(c.id, { rising: up?.x ?? null, falling: down?.x ?? null });
+  });
+  return out;
 }
 
 function checkHysteresis(p: Prepared, a: Analysis, add: Add, fx: (x: number) => string): void {

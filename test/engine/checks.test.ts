@@ -57,4 +57,15 @@ describe('checks', () => {
     const f = analyze(d).findings.find((x) => x.code === 'reference-dropout');
     expect(f?.x).toBeCloseTo(3, 6);
   });
+
+  test('thresholds on a string fed from a wandering supply are reported with how far they move', () => {
+    // String from the 12 V supply (±1 V): a tap at half the supply moves by ±0.5 V (divider rule).
+    const d = makeDesign({
+      supply: { kind: 'fixed', volts: 12, min: 11, max: 13 },
+      reference: { kind: 'supply' },
+      channels: [stepChannel('A', 1, 'T1', { pullup: { ohms: 1e4, to: 'supply' } })],
+    });
+    const f = analyze(d).findings.find((x) => x.code === 'supply-dependent');
+    expect(f?.amount).toBe('±500 mV');
+  });
 });
