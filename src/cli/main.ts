@@ -1,13 +1,14 @@
 import { parseArgs } from 'node:util';
 import { checkCommand } from './commands/check';
 import { planCommand } from './commands/plan';
+import { spreadCommand } from './commands/spread';
 import { EXIT, type CliIo, type Command } from './io';
 
 /** Version printed by --version; kept in step with package.json by the build. */
 export const VERSION = '0.1.0';
 
 /** Every sub-command, in the order `--help` lists them. */
-export const COMMANDS: Command[] = [checkCommand, planCommand];
+export const COMMANDS: Command[] = [checkCommand, planCommand, spreadCommand];
 
 const HELP = () => `tapline ${VERSION}: plan and check comparator threshold ladders.
 

@@ -1,7 +1,9 @@
 /**
  * The uncertain parameters of a design and how a point in their box becomes a perturbed network.
- * Each parameter spans [lo, hi]; a unit value u in [-1, 1] maps to centre + u·half-width, so the
- * corners of the box are u = ±1 and the same mapping serves Monte Carlo draws and worst-case corners.
+ * Each parameter spans [lo, hi] around its nominal value; a unit value u in [-1, 1] maps linearly
+ * from lo (u = −1) through nominal (u = 0) to hi (u = +1), so the corners of the box are u = ±1 and
+ * the same mapping serves Monte Carlo draws and worst-case corners. A nominal off centre (a typical
+ * bias current well under its maximum, a nominal supply inside its range) keeps most draws near it.
  */
 import type { Design } from '../design/types';
 import type { Network } from '../network/types';
@@ -29,15 +31,15 @@ export interface SpreadOptions {
 }
 
 /**
- * Default distributions: manufactured values (resistors, reference, offset, knee) are normal with the
- * tolerance at 3 sigma; bias current and supply, whose place in their range is not centred on a
- * typical value, are uniform. Common practice, no source.
+ * Default distributions: manufactured values (resistors, reference, offset, bias, knee) are normal
+ * with the limit at 3 sigma, so most parts sit near nominal or typical; the supply may sit anywhere
+ * in its range and is uniform. Common practice, no source.
  */
 export const DEFAULT_DISTRIBUTIONS: Readonly<Record<ParameterGroup, DistributionKind>> = Object.freeze({
   resistor: 'normal',
   reference: 'normal',
   offset: 'normal',
-  bias: 'uniform',
+  bias: 'normal',
   knee: 'normal',
   supply: 'uniform',
 });
@@ -61,8 +63,9 @@ export interface Parameter {
   id: string;
   group: ParameterGroup;
   target: Target;
-  /** Lower and upper limit of the field (ohms, volts or amperes). */
+  /** Lower limit, nominal and upper limit of the field (ohms, volts or amperes). */
   lo: number;
+  nominal: number;
   hi: number;
   distribution: DistributionKind;
 }
@@ -74,8 +77,8 @@ export interface Parameter {
 export function spreadParameters(design: Design, net: Network, options: SpreadOptions = {}): Parameter[] {
   const dist = { ...DEFAULT_DISTRIBUTIONS, ...options.distributions };
   const out: Parameter[] = [];
-  const push = (id: string, group: ParameterGroup, target: Target, lo: number, hi: number) => {
-    if (hi > lo) out.push({ id, group, target, lo, hi, distribution: dist[group] });
+  const push = (id: string, group: ParameterGroup, target: Target, lo: number, hi: number, nominal = 0.5 * (lo + hi)) => {
+    if (hi > lo) out.push({ id, group, target, lo, nominal: Math.min(hi, Math.max(lo, nominal)), hi, distribution: dist[group] });
   };
   const tolOf = (id: string) => options.partTolerance?.[id] ?? options.resistorTolerance ?? design.resistorTolerance;
   net.resistors.forEach((r, index) => {
@@ -98,26 +101,27 @@ export function spreadParameters(design: Design, net: Network, options: SpreadOp
   net.vsources.forEach((s, index) => {
     if (s.id === 'VREF') push('reference', 'reference', { kind: 'vsource', index }, s.c0 * (1 - refTol), s.c0 * (1 + refTol));
     if (index === net.supplySource && design.supply.kind === 'fixed' && options.supplyRange !== false) {
-      push('supply', 'supply', { kind: 'vsource', index }, design.supply.min, design.supply.max);
+      push('supply', 'supply', { kind: 'vsource', index }, design.supply.min, design.supply.max, design.supply.volts);
     }
   });
   const part = design.part;
   const typical = options.partLimit === 'typical';
   const vos = typical ? part.vosTyp : part.vosMax;
   const ib = typical ? part.ibTyp : part.ibMax;
-  // Bias current runs from 0 to its limit in the class direction (sign +1 = out of the pin).
+  // Bias current runs from 0 through typical to its limit in the class direction (+1 = out of the pin).
   const sign = part.biasDirection === 'out' ? 1 : -1;
+  const [ibLo, ibHi] = [Math.min(0, sign * ib), Math.max(0, sign * ib)];
   net.comparators.forEach((c, index) => {
     push(`Vos ${c.id}`, 'offset', { kind: 'vos', index }, -vos, vos);
-    push(`Ib+ ${c.id}`, 'bias', { kind: 'ib-plus', index }, Math.min(0, sign * ib), Math.max(0, sign * ib));
-    push(`Ib- ${c.id}`, 'bias', { kind: 'ib-minus', index }, Math.min(0, sign * ib), Math.max(0, sign * ib));
+    push(`Ib+ ${c.id}`, 'bias', { kind: 'ib-plus', index }, ibLo, ibHi, c.ibPlus);
+    push(`Ib- ${c.id}`, 'bias', { kind: 'ib-minus', index }, ibLo, ibHi, c.ibMinus);
   });
   return out;
 }
 
-/** Value of a parameter at the unit point u in [-1, 1] (SI units of its field). */
+/** Value of a parameter at the unit point u in [-1, 1]: lo, nominal, hi at −1, 0, +1 (SI units). */
 export function parameterValue(p: Parameter, u: number): number {
-  return 0.5 * (p.lo + p.hi) + 0.5 * u * (p.hi - p.lo);
+  return u < 0 ? p.nominal + u * (p.nominal - p.lo) : p.nominal + u * (p.hi - p.nominal);
 }
 
 /**
