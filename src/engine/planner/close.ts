@@ -3,7 +3,7 @@
  * targets, correct the unknowns, repeat. Fixed-point updates: each tap's unloaded voltage moves by
  * the centre error times the sense slope; each feedback resistor follows the hysteresis law
  * h ∝ S / (S + RF) of its source resistance S, which is exact for an isolated channel, so the
- * iteration contracts by the (small) coupling between channels.
+ * iteration contracts by the (small) coupling between channels; steps shorten when it overshoots.
  */
 import type { Channel, Design } from '../design/types';
 import { prepare } from '../prepare';
@@ -20,7 +20,8 @@ export function measure(design: Design): Map<string, Trips> {
   const p = prepare(design);
   const out = new Map<string, Trips>();
   p.net.comparators.forEach((c, k) => {
-    const up = p.sweep.flips.find((f) => f.element === k && f.direction === 'up');
+    // Flips at x = min are the initial settle, not a trip.
+    const up = p.sweep.flips.find((f) => f.element === k && f.direction === 'up' && f.x > design.quantity.min);
     const down = p.sweep.flips.find((f) => f.element === k && f.direction === 'down');
     out.set(c.id, { rising: up ? up.x : null, falling: down ? down.x : null });
   });
@@ -60,14 +61,19 @@ export function close(model: Model, options: { fixString?: boolean; maxIter?: nu
   let trips = measure(design);
   let error = worstError(model, trips);
   let iterations = 0;
+  // Relaxation: full steps while the error falls, shorter ones when coupled channels overshoot.
+  let step = 1;
+  let previous = Infinity;
   while (error > tol && iterations < maxIter) {
+    step = error > previous ? Math.max(1 / 16, step / 2) : Math.min(1, step * 1.5);
+    previous = error;
     const stuck = units.filter((u) => trips.get(u.id)?.rising == null || trips.get(u.id)?.falling == null);
     if (stuck.length) return { error, iterations, stuck: stuck.map((u) => u.id) };
     if (!options.fixString) {
       model.taps.forEach((tap, j) => {
         const u = tap.units[0];
         const t = trips.get(u.id) as { rising: number; falling: number };
-        model.tapVolts[j] += sense.a1 * ((u.rising + u.falling) / 2 - (t.rising + t.falling) / 2);
+        model.tapVolts[j] += step * sense.a1 * ((u.rising + u.falling) / 2 - (t.rising + t.falling) / 2);
       });
       if (!ordered(model.tapVolts, model.vref)) return { error, iterations, stuck: [] };
       design.string = stringFromTaps(model.vref, model.total, model.tapVolts);
@@ -80,7 +86,8 @@ export function close(model: Model, options: { fixString?: boolean; maxIter?: nu
       const want = u.rising - u.falling;
       const s = feedbackSource(model, ch, u);
       const rf = ch.feedback.ohms;
-      ch.feedback.ohms = h > 0 ? Math.max(0.01 * (rf + s), ((rf + s) * h) / want - s) : rf / 2;
+      const next = h > 0 ? Math.max(0.01 * (rf + s), ((rf + s) * h) / want - s) : rf / 2;
+      ch.feedback.ohms = rf * (next / rf) ** step;
     }
     trips = measure(design);
     error = worstError(model, trips);

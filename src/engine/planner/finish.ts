@@ -6,7 +6,7 @@
 import type { Channel } from '../design/types';
 import { nearestInSeries, stepInSeries } from '../series';
 import { close, measure, worstError } from './close';
-import { bestPair, snapString, stringCost, tapFractions } from './snap';
+import { bestPair, candidatesFor, snapScales, snapString, stringCost, tapFractions } from './snap';
 import type { Model } from './synthesize';
 import type { PairOffer, PlanProblem } from './types';
 
@@ -41,6 +41,7 @@ export function standardise(model: Model): { pairs: PairOffer[]; problem: PlanPr
     pairs.push(b.pair);
   }
   close(model, { fixString: true, maxIter: 30 });
+  if (resnapDivider(model)) close(model, { fixString: true, maxIter: 30 });
   snapFeedback(model, pairs);
   return { pairs, problem: null };
 }
@@ -73,4 +74,39 @@ function snapFeedback(model: Model, pairs: PairOffer[]): void {
       pairs.push(pair);
     } else c.feedback.ohms = keep;
   }
+}
+
+/**
+ * The divider ratio scales every threshold at once, so a common error left by the string's
+ * standard values can be taken out by re-choosing the divider among its series neighbours
+ * (inside the input budget). Trips move as sig(x') = sig(x)·ρ/ρ'. Returns whether it changed.
+ */
+function resnapDivider(model: Model): boolean {
+  const { design, targets } = model;
+  const div = design.input.divider;
+  if (!div || design.input.signal !== 'voltage') return false;
+  const { offset, gain } = design.input;
+  const rho = div.bottom / (div.top + div.bottom);
+  const trips = measure(design);
+  const pairs = model.units.flatMap((u) => {
+    const t = trips.get(u.id);
+    return t && t.rising !== null && t.falling !== null ? [[t.rising, u.rising], [t.falling, u.falling]] : [];
+  });
+  const cost = (r: number) => Math.max(...pairs.map(([x, want]) => Math.abs(((offset + gain * x) * rho) / r / gain - offset / gain - want)));
+  const minTotal = (offset + gain * design.quantity.max) / targets.inputBudget;
+  let best = { top: div.top, bottom: div.bottom, cost: cost(rho) };
+  for (const scale of snapScales(design.series)) {
+    for (const top of candidatesFor(div.top * scale, design.series)) {
+      for (const bottom of candidatesFor(div.bottom * scale, design.series)) {
+        if (top + bottom < minTotal) continue;
+        const c = cost(bottom / (top + bottom));
+        if (c < best.cost) best = { top, bottom, cost: c };
+      }
+    }
+  }
+  if (best.top === div.top && best.bottom === div.bottom) return false;
+  design.input.divider = { top: best.top, bottom: best.bottom };
+  const r = best.bottom / (best.top + best.bottom);
+  model.sense = { a0: r * offset, a1: r * gain, rth: (best.top * best.bottom) / (best.top + best.bottom) };
+  return true;
 }

@@ -20,10 +20,10 @@ export function sizeLoads(design: Design, t: Targets, units: Unit[], notes: stri
   const { min, max } = design.quantity;
   // Supply where the LED is lit, halfway through the lit stretch (V).
   const vsLit = (u: Unit) => supplyAt(design, u.sinksOnRise ? (u.rising + max) / 2 : (min + u.falling) / 2);
-  const branch = (u: Unit, vs: number): number | null => {
+  const branch = (u: Unit, vs: number, sinkShare = 0.9, xTop?: number): number | null => {
     const r = (vs - t.led.knee - part.vsat0) / t.led.current - t.led.rdyn - part.rsat;
-    const vTop = supplyAt(design, u.sinksOnRise ? max : u.falling);
-    const rSink = (vTop - t.led.knee - part.vsat0) / (0.9 * part.sinkMax) - t.led.rdyn - part.rsat;
+    const vTop = supplyAt(design, xTop ?? (u.sinksOnRise ? max : u.falling));
+    const rSink = (vTop - t.led.knee - part.vsat0) / (sinkShare * part.sinkMax) - t.led.rdyn - part.rsat;
     const need = Math.max(r, rSink);
     if (r <= 0) {
       problems.push({
@@ -42,8 +42,9 @@ export function sizeLoads(design: Design, t: Targets, units: Unit[], notes: stri
   const pullup = (u: Unit) => {
     if (oc) ch(u).pullup = { ohms: nearestInSeries(t.pullup, design.series), to: 'supply' };
   };
+  // An output under a between-outputs LED also sinks its own pull-up's current: share the rating.
   const between = (lower: Unit, upper: Unit) => {
-    const r = branch(lower, vsLit(lower));
+    const r = branch(lower, vsLit(lower), 0.35);
     if (r === null) return;
     led(lower, `out:${upper.id}`, Math.max(1, r * LED_SHARE));
     if (oc) ch(upper).pullup = { ohms: nearestInSeries(r * (1 - LED_SHARE), design.series), to: 'supply' };
@@ -55,7 +56,7 @@ export function sizeLoads(design: Design, t: Targets, units: Unit[], notes: stri
         const upper = mine[k + 1];
         if (fn.mode === 'dot' && upper) between(u, upper);
         else {
-          const r = branch(u, vsLit(u));
+          const r = branch(u, vsLit(u), fn.mode === 'dot' ? 0.35 : 0.9);
           if (r !== null) led(u, 'supply', r);
         }
       });
@@ -80,7 +81,7 @@ export function sizeLoads(design: Design, t: Targets, units: Unit[], notes: stri
       }
       ch(hi).wiredTo = lo.id;
       if (fn.load === 'led') {
-        const r = branch(lo, supplyAt(design, (min + max) / 2));
+        const r = branch(lo, supplyAt(design, (min + max) / 2), 0.9, max);
         if (r !== null) led(lo, 'supply', r);
       } else {
         pullup(lo);
