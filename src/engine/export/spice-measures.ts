@@ -34,9 +34,15 @@ export function tripTolerance(p: Prepared): number {
   const { design, net } = p;
   if (design.quantity.unit === 'V') return 1e-3;
   const sol = p.solver.solve(p.sweep.initial);
-  const node = net.nodes.indexOf('in');
+  const node = senseNode(net.nodes, net.supply);
   const gain = node >= 0 ? Math.abs(sol.v1[node]) : 0;
   return gain > 0 ? 1e-3 / gain : 1e-3 * (design.quantity.max - design.quantity.min);
+}
+
+/** Index of the sense node: `in`, or the signal node or supply rail it is an alias of. */
+export function senseNode(nodes: string[], supply: number): number {
+  const named = ['in', 'sig'].map((n) => nodes.indexOf(n)).find((k) => k >= 0);
+  return named ?? supply;
 }
 
 /** The measurements the netlist states: the first transition of each channel on each sweep. */
@@ -45,7 +51,8 @@ export function spiceMeasures(p: Prepared, ds: Designators): SpiceMeasure[] {
   p.net.comparators.forEach((c, k) => {
     const unit = ds.unitOf(c.id);
     for (const dir of ['up', 'down'] as const) {
-      const flip = p.sweep.flips.find((f) => f.element === k && f.direction === dir);
+      // Up flips at x = min are the initial settle (the starting state the switches are given), not trips.
+      const flip = p.sweep.flips.find((f) => f.element === k && f.direction === dir && (dir === 'down' || f.x > p.design.quantity.min));
       if (!flip) continue;
       const edge = dir === 'up' ? 'rising' : 'falling';
       out.push({ name: `x${edge[0]}_${unit.toLowerCase()}`, channel: c.id, unit, edge, to: flip.to ? 'low' : 'high', x: flip.x });
