@@ -1,6 +1,8 @@
 import { parseArgs } from 'node:util';
 import { checkCommand } from './commands/check';
+import { exportCommand } from './commands/export';
 import { planCommand } from './commands/plan';
+import { presetsCommand } from './commands/presets';
 import { spreadCommand } from './commands/spread';
 import { EXIT, type CliIo, type Command } from './io';
 
@@ -8,7 +10,7 @@ import { EXIT, type CliIo, type Command } from './io';
 export const VERSION = '0.1.0';
 
 /** Every sub-command, in the order `--help` lists them. */
-export const COMMANDS: Command[] = [checkCommand, planCommand, spreadCommand];
+export const COMMANDS: Command[] = [checkCommand, planCommand, spreadCommand, exportCommand, presetsCommand];
 
 const HELP = () => `tapline ${VERSION}: plan and check comparator threshold ladders.
 
