@@ -17,7 +17,7 @@ export interface PlanReportOptions {
 export function planReport(result: PlanResult, opts: PlanReportOptions): string {
   const unit = result.design.quantity.unit;
   const minus = opts.ascii ? '-' : '−';
-  const fx = (x: number | null) => (x === null ? 'never' : formatEng(x, unit, { digits: 4, ascii: opts.ascii }));
+  const fx = (x: number | null) => (x === null ? 'never' : formatEng(x, unit, { digits: 5, ascii: opts.ascii }));
   const parts: string[] = [];
   if (result.allocation.length) {
     parts.push('Packages and channels');
@@ -46,6 +46,9 @@ export function planReport(result: PlanResult, opts: PlanReportOptions): string 
   if (result.notes.length) parts.push(['Notes', ...result.notes.map((n) => `  ${n}`)].join('\n'));
   if (result.problems.length) {
     parts.push(['Cannot meet the targets', ...result.problems.map((p) => `  ${p.target}: ${p.message}\n    Fix: ${p.fix}`)].join('\n'));
+  }
+  if (result.design.battery) {
+    parts.push(`Caution: a ${result.design.battery.chemistry} battery can drive very large currents into a short. Fuse the supply lead at the battery terminal and insulate the leads before connecting.`);
   }
   parts.push(opts.output ? `Realised design written to ${opts.output}` : 'No design written.');
   return `${parts.join('\n\n')}\n`;
