@@ -21,15 +21,16 @@ function list(items: string[]): string {
 
 function describe(design: Design, fn: TargetFunction): string {
   const fx = (x: number) => formatX(design, x);
-  const hyst = `${fx(fn.hysteresis)} hysteresis (${fn.anchor} edge on the stated value)`;
+  const hyst = `${fx(fn.hysteresis)} hysteresis (${fn.anchor === 'centre' ? 'centred on the stated value' : `${fn.anchor} edge on the stated value`})`;
+  const load = (l: 'led' | 'logic' | 'relay') => (l === 'led' ? 'an LED' : l === 'logic' ? 'a logic input' : 'a relay driver');
   if (fn.kind === 'bar') {
     const how = fn.mode === 'dot' ? 'a dot display: only the step at the level lit' : 'a bar display: every step below the level lit';
     return `${fn.id}: ${how}, ${fn.thresholds.length} steps at ${list(fn.thresholds.map(fx))}, ${hyst}`;
   }
   if (fn.kind === 'window') {
-    return `${fn.id}: a window from ${fx(fn.low)} to ${fx(fn.high)}, output asserted ${fn.sense} it, driving ${fn.load === 'led' ? 'an LED' : `a ${fn.load}`}, ${hyst}`;
+    return `${fn.id}: a window from ${fx(fn.low)} to ${fx(fn.high)}, output asserted ${fn.sense} it, driving ${load(fn.load)}, ${hyst}`;
   }
-  return `${fn.id}: an output asserted when x is ${fn.polarity} ${fx(fn.threshold)}, driving ${fn.load === 'led' ? 'an LED' : `a ${fn.load}`}, ${hyst}`;
+  return `${fn.id}: an output asserted when x is ${fn.polarity} ${fx(fn.threshold)}, driving ${load(fn.load)}, ${hyst}`;
 }
 
 /** The job statement: what is measured, how it reaches the comparators, and what each target asks. */
