@@ -136,7 +136,7 @@ function channelResults(p: Prepared, st: SegmentStats): ChannelResult[] {
   return net.comparators.map((c, k) => {
     const ch = design.channels.find((d) => d.id === c.id);
     // Flips at x = min are the initial settle (the output's starting state), not a trip.
-    const up = p.sweep.flips.find((f) => f.element === k && f.direction === 'up' && f.x > design.quantity.min);
+    const up = p.sweep.flips.find((f) => f.element === k && f.direction === 'up');
     const down = p.sweep.flips.find((f) => f.element === k && f.direction === 'down');
     const trip = (f: typeof up): Trip | null => (f ? { x: f.x, pinPlus: f.pinPlus, pinMinus: f.pinMinus } : null);
     const signalIsMinus = ch?.plus === 'in' ? false : true;

@@ -1,4 +1,4 @@
-import { nodeAffine, Solver, type State, stateKey } from './network/solve';
+import { nodeAffine, type Solver, type State } from './network/solve';
 
 /** Sweep direction: x rising or falling. */
 export type Direction = 'up' | 'down';
@@ -66,6 +66,8 @@ export function sweep(solver: Solver, min: number, max: number): SweepResult {
   const result: SweepResult = { flips: [], segments: [], bands: [], initial: new Uint8Array(count) };
   let state: State = new Uint8Array(count);
   state = settle(solver, state, min, 'up', result, max);
+  // Settling the starting state is not a transition of the circuit: only later flips are trips.
+  result.flips.length = 0;
   result.initial = state.slice();
   state = walk(solver, state, min, max, 'up', result);
   walk(solver, state, max, min, 'down', result);
@@ -107,12 +109,17 @@ function pushSegment(out: SweepResult, dir: Direction, a: number, b: number, sta
   const last = out.segments[out.segments.length - 1];
   const from = Math.min(a, b);
   const to = Math.max(a, b);
-  if (last && last.direction === dir && stateKey(last.state) === stateKey(state)) {
+  if (last && last.direction === dir && sameState(last.state, state)) {
     last.from = Math.min(last.from, from);
     last.to = Math.max(last.to, to);
     return;
   }
   out.segments.push({ direction: dir, from, to, state: state.slice() });
+}
+
+function sameState(a: State, b: State): boolean {
+  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
+  return true;
 }
 
 /**
@@ -124,14 +131,13 @@ function settle(solver: Solver, start: State, x: number, dir: Direction, out: Sw
   const sign = dir === 'up' ? 1 : -1;
   const net = solver.net;
   const nc = net.comparators.length;
-  const seen: string[] = [];
+  const seen: State[] = [];
   let state = start.slice();
   const limit = 4 * state.length + 8;
   for (let step = 0; step <= limit; step++) {
-    const key = stateKey(state);
-    const repeat = seen.indexOf(key);
+    const repeat = seen.findIndex((s) => sameState(s, state));
     if (repeat >= 0) return escapeBand(solver, seen.slice(repeat), x, dir, out, to);
-    seen.push(key);
+    seen.push(state.slice());
     const sol = solver.solve(state);
     let worst = -1;
     let amount = 0;
@@ -159,9 +165,8 @@ function settle(solver: Solver, start: State, x: number, dir: Direction, out: Sw
   return state;
 }
 
-function escapeBand(solver: Solver, cycle: string[], x: number, dir: Direction, out: SweepResult, to: number): State {
+function escapeBand(solver: Solver, states: State[], x: number, dir: Direction, out: SweepResult, to: number): State {
   const sign = dir === 'up' ? 1 : -1;
-  const states = cycle.map((key) => Uint8Array.from(key, (ch) => (ch === '1' ? 1 : 0)));
   const elements: number[] = [];
   for (let k = 0; k < states[0].length; k++) {
     if (states.some((s) => s[k] !== states[0][k])) elements.push(k);

@@ -27,12 +27,27 @@ export interface Solution {
   ok: boolean;
 }
 
-/** A two-terminal branch: current from a to b = g·(V(a) − V(b) − e). */
-interface Branch {
-  a: number;
-  b: number;
-  g: number;
-  e: number;
+/**
+ * Two-terminal branches in flat arrays: current from a[k] to b[k] = g[k]·(V(a) − V(b) − e[k]).
+ * Flat typed arrays keep the per-state work free of object lookups.
+ */
+class Branches {
+  readonly a: Int32Array;
+  readonly b: Int32Array;
+  readonly g: Float64Array;
+  readonly e: Float64Array;
+  constructor(count: number) {
+    this.a = new Int32Array(count);
+    this.b = new Int32Array(count);
+    this.g = new Float64Array(count);
+    this.e = new Float64Array(count);
+  }
+  set(k: number, a: number, b: number, g: number, e: number): void {
+    this.a[k] = a;
+    this.b[k] = b;
+    this.g[k] = g;
+    this.e[k] = e;
+  }
 }
 
 /**
@@ -47,21 +62,22 @@ export class Solver {
   readonly size: number;
   /** Unknown index of every node, or -1 when a source holds it. */
   private readonly slot: Int32Array;
-  private readonly unknowns: Int32Array;
+  private readonly nu: number;
   private readonly held0: Float64Array;
   private readonly held1: Float64Array;
-  private readonly isHeld: Uint8Array;
   private readonly baseA: Float64Array;
   private readonly baseR0: Float64Array;
   private readonly baseR1: Float64Array;
   private readonly inj0: Float64Array;
   private readonly inj1: Float64Array;
-  /** Fixed branches touching a held node, for the source currents. */
-  private readonly heldBranches: Branch[] = [];
-  /** Per element: the branch it adds when its flag is set (comparator low, diode on) or clear (push-pull high). */
-  private readonly onBranch: (Branch | null)[] = [];
-  private readonly offBranch: (Branch | null)[] = [];
+  /** Fixed branches (resistors) and, per element, the branch it adds when set (on) or clear (off). */
+  private readonly fixed: Branches;
+  private readonly on: Branches;
+  private readonly off: Branches;
+  private readonly hasOff: Uint8Array;
   private readonly work: Float64Array;
+  private readonly r0: Float64Array;
+  private readonly r1: Float64Array;
   private readonly cache = new Map<number | string, Solution>();
 
   constructor(net: Network) {
@@ -70,25 +86,22 @@ export class Solver {
     this.size = n;
     this.held0 = new Float64Array(n);
     this.held1 = new Float64Array(n);
-    this.isHeld = new Uint8Array(n);
+    const isHeld = new Uint8Array(n);
     for (const s of net.vsources) {
-      this.isHeld[s.node] = 1;
+      isHeld[s.node] = 1;
       this.held0[s.node] = s.c0;
       this.held1[s.node] = s.c1;
     }
-    this.slot = new Int32Array(n).fill(-1);
-    const list: number[] = [];
-    for (let k = 0; k < n; k++) {
-      if (this.isHeld[k]) continue;
-      this.slot[k] = list.length;
-      list.push(k);
-    }
-    this.unknowns = Int32Array.from(list);
-    const nu = list.length;
+    this.slot = new Int32Array(n);
+    let nu = 0;
+    for (let k = 0; k < n; k++) this.slot[k] = isHeld[k] ? -1 : nu++;
+    this.nu = nu;
     this.baseA = new Float64Array(nu * nu);
     this.work = new Float64Array(nu * nu);
     this.baseR0 = new Float64Array(nu);
     this.baseR1 = new Float64Array(nu);
+    this.r0 = new Float64Array(nu);
+    this.r1 = new Float64Array(nu);
     this.inj0 = new Float64Array(n);
     this.inj1 = new Float64Array(n);
     for (let i = 0; i < nu; i++) this.baseA[i * nu + i] += GMIN;
@@ -106,19 +119,24 @@ export class Solver {
       this.baseR0[s] += this.inj0[k];
       this.baseR1[s] += this.inj1[k];
     }
-    for (const r of net.resistors) {
-      const br = { a: r.a, b: r.b, g: 1 / r.ohms, e: 0 };
-      this.stamp(this.baseA, this.baseR0, this.baseR1, br);
-      if (this.touchesHeld(br)) this.heldBranches.push(br);
-    }
-    for (const c of net.comparators) {
-      this.onBranch.push({ a: c.out, b: GND, g: 1 / c.rsat, e: c.vsat0 });
-      this.offBranch.push(c.pushPull ? { a: c.out, b: net.supply, g: 1 / c.rout, e: -c.vohDrop } : null);
-    }
-    for (const d of net.diodes) {
-      this.onBranch.push({ a: d.anode, b: d.cathode, g: 1 / (d.rSeries + d.rdyn), e: d.knee });
-      this.offBranch.push(null);
-    }
+    this.fixed = new Branches(net.resistors.length);
+    net.resistors.forEach((r, k) => {
+      this.fixed.set(k, r.a, r.b, 1 / r.ohms, 0);
+      this.stamp(this.baseA, this.baseR0, this.baseR1, this.fixed, k);
+    });
+    const count = net.comparators.length + net.diodes.length;
+    this.on = new Branches(count);
+    this.off = new Branches(count);
+    this.hasOff = new Uint8Array(count);
+    net.comparators.forEach((c, k) => {
+      this.on.set(k, c.out, GND, 1 / c.rsat, c.vsat0);
+      if (c.pushPull) {
+        this.off.set(k, c.out, net.supply, 1 / c.rout, -c.vohDrop);
+        this.hasOff[k] = 1;
+      }
+    });
+    const nc = net.comparators.length;
+    net.diodes.forEach((d, k) => this.on.set(nc + k, d.anode, d.cathode, 1 / (d.rSeries + d.rdyn), d.knee));
   }
 
   /** Solves the network in `state`, from the cache when it has been solved before. */
@@ -137,57 +155,53 @@ export class Solver {
     this.inj1[node] += i1;
   }
 
-  private touchesHeld(br: Branch): boolean {
-    return (br.a !== GND && this.isHeld[br.a] === 1) || (br.b !== GND && this.isHeld[br.b] === 1);
-  }
-
-  /** Adds a branch to the reduced system: held node voltages move to the right-hand sides. */
-  private stamp(m: Float64Array, r0: Float64Array, r1: Float64Array, br: Branch): void {
-    const nu = this.unknowns.length;
-    const sa = br.a === GND ? -1 : this.slot[br.a];
-    const sb = br.b === GND ? -1 : this.slot[br.b];
-    const { g, e } = br;
+  /** Adds branch k of `br` to the reduced system: held node voltages move to the right-hand sides. */
+  private stamp(m: Float64Array, r0: Float64Array, r1: Float64Array, br: Branches, k: number): void {
+    const nu = this.nu;
+    const a = br.a[k];
+    const b = br.b[k];
+    const g = br.g[k];
+    const e = br.e[k];
+    const sa = a === GND ? -1 : this.slot[a];
+    const sb = b === GND ? -1 : this.slot[b];
     if (sa >= 0) {
       m[sa * nu + sa] += g;
       r0[sa] += g * e;
       if (sb >= 0) m[sa * nu + sb] -= g;
-      else if (br.b !== GND) {
-        r0[sa] += g * this.held0[br.b];
-        r1[sa] += g * this.held1[br.b];
+      else if (b !== GND) {
+        r0[sa] += g * this.held0[b];
+        r1[sa] += g * this.held1[b];
       }
     }
     if (sb >= 0) {
       m[sb * nu + sb] += g;
       r0[sb] -= g * e;
       if (sa >= 0) m[sb * nu + sa] -= g;
-      else if (br.a !== GND) {
-        r0[sb] += g * this.held0[br.a];
-        r1[sb] += g * this.held1[br.a];
+      else if (a !== GND) {
+        r0[sb] += g * this.held0[a];
+        r1[sb] += g * this.held1[a];
       }
     }
   }
 
-  private factorAndSolve(state: State): Solution {
-    const { net, size: n } = this;
-    const nu = this.unknowns.length;
-    const a = this.work;
-    a.set(this.baseA);
-    const r0 = Float64Array.from(this.baseR0);
-    const r1 = Float64Array.from(this.baseR1);
-    const active: Branch[] = [];
+  private stampState(state: State): void {
+    const { work, r0, r1 } = this;
+    work.set(this.baseA);
+    r0.set(this.baseR0);
+    r1.set(this.baseR1);
     for (let k = 0; k < state.length; k++) {
-      const br = state[k] ? this.onBranch[k] : this.offBranch[k];
-      if (!br) continue;
-      this.stamp(a, r0, r1, br);
-      active.push(br);
+      if (state[k]) this.stamp(work, r0, r1, this.on, k);
+      else if (this.hasOff[k]) this.stamp(work, r0, r1, this.off, k);
     }
-    let ok = choleskySolve2(a, nu, r0, r1);
+  }
+
+  private factorAndSolve(state: State): Solution {
+    const { net, size: n, nu, r0, r1 } = this;
+    this.stampState(state);
+    let ok = choleskySolve2(this.work, nu, r0, r1);
     if (!ok) {
-      a.set(this.baseA);
-      r0.set(this.baseR0);
-      r1.set(this.baseR1);
-      for (const br of active) this.stamp(a, r0, r1, br);
-      ok = luSolve2(a, nu, r0, r1);
+      this.stampState(state);
+      ok = luSolve2(this.work, nu, r0, r1);
     }
     const m = net.vsources.length;
     const v0 = new Float64Array(n + m);
@@ -197,7 +211,7 @@ export class Solver {
       v0[k] = s < 0 ? this.held0[k] : r0[s];
       v1[k] = s < 0 ? this.held1[k] : r1[s];
     }
-    this.sourceCurrents(v0, v1, active);
+    for (let j = 0; j < m; j++) this.sourceCurrent(v0, v1, state, j);
     const nc = net.comparators.length;
     const da = new Float64Array(state.length);
     const db = new Float64Array(state.length);
@@ -206,31 +220,34 @@ export class Solver {
       da[k] = at(v0, c.minus) - at(v0, c.plus) - c.vos;
       db[k] = at(v1, c.minus) - at(v1, c.plus);
     }
-    for (let k = 0; k < net.diodes.length; k++) {
-      const d = net.diodes[k];
-      da[nc + k] = at(v0, d.anode) - at(v0, d.cathode) - d.knee;
-      db[nc + k] = at(v1, d.anode) - at(v1, d.cathode);
+    const on = this.on;
+    for (let k = nc; k < state.length; k++) {
+      da[k] = at(v0, on.a[k]) - at(v0, on.b[k]) - on.e[k];
+      db[k] = at(v1, on.a[k]) - at(v1, on.b[k]);
     }
     return { v0, v1, da, db, ok };
   }
 
-  /** Current each source delivers: what leaves its node through the branches minus injections. */
-  private sourceCurrents(v0: Float64Array, v1: Float64Array, active: Branch[]): void {
+  /** Current source j delivers: what leaves its node through the branches, minus injections. */
+  private sourceCurrent(v0: Float64Array, v1: Float64Array, state: State, j: number): void {
+    const node = this.net.vsources[j].node;
     const n = this.size;
-    this.net.vsources.forEach((s, j) => {
-      let i0 = -this.inj0[s.node];
-      let i1 = -this.inj1[s.node];
-      const add = (br: Branch) => {
-        const sign = br.a === s.node ? 1 : br.b === s.node ? -1 : 0;
-        if (!sign) return;
-        i0 += sign * br.g * (at(v0, br.a) - at(v0, br.b) - br.e);
-        i1 += sign * br.g * (at(v1, br.a) - at(v1, br.b));
-      };
-      for (const br of this.heldBranches) add(br);
-      for (const br of active) add(br);
-      v0[n + j] = i0;
-      v1[n + j] = i1;
-    });
+    const acc = { i0: -this.inj0[node], i1: -this.inj1[node] };
+    const add = (br: Branches, k: number) => {
+      const a = br.a[k];
+      const b = br.b[k];
+      const sign = a === node ? 1 : b === node ? -1 : 0;
+      if (!sign) return;
+      acc.i0 += sign * br.g[k] * (at(v0, a) - at(v0, b) - br.e[k]);
+      acc.i1 += sign * br.g[k] * (at(v1, a) - at(v1, b));
+    };
+    for (let k = 0; k < this.fixed.g.length; k++) add(this.fixed, k);
+    for (let k = 0; k < state.length; k++) {
+      if (state[k]) add(this.on, k);
+      else if (this.hasOff[k]) add(this.off, k);
+    }
+    v0[n + j] = acc.i0;
+    v1[n + j] = acc.i1;
   }
 }
 
