@@ -1,10 +1,52 @@
 /**
- * Optional capabilities wired into the screen: the planner, the spread analysis and export. Each one
- * is absent until its module is part of the build; the key table then shows why the key is off.
+ * Optional capabilities wired into the screen: the planner and the spread analysis (worker threads,
+ * cancellable). Export stays absent until an export format exists; the key table then says why the
+ * key is off.
  */
-import type { Services } from './services';
+import { plan } from '../engine/planner';
+import type { QuantitySpread, SpreadReport } from '../engine/spread';
+import { runSpreadParallel } from '../workers/spread-pool';
+import type { PlanOutcome, Services } from './services';
+import type { Range, SpreadSummary } from './state/app-state';
+import type { Design } from '../engine/design/types';
+
+/** Monte Carlo trials the screen runs: enough for stable ±3 sigma points, quick enough to wait for. */
+export const SCREEN_TRIALS = 2000;
+
+function toRange(q: QuantitySpread): Range | null {
+  if (!q.stats) return null;
+  return { min: q.stats.min, max: q.stats.max, lo: q.stats.p00135, hi: q.stats.p99865, worstMin: q.bound?.min ?? null, worstMax: q.bound?.max ?? null };
+}
+
+/** The screen's summary of a spread report. */
+export function summarizeSpread(r: SpreadReport): SpreadSummary {
+  return { trials: r.trials, channels: r.channels.map((c) => ({ id: c.id, rising: toRange(c.rising), falling: toRange(c.falling) })) };
+}
+
+/** Re-plans `design` from its targets; a plan that misses some target is still applied, with the reason. */
+export function planDesign(design: Design): PlanOutcome {
+  const r = plan(design);
+  const met = r.rows.filter((row) => row.ok).length;
+  const problems = r.problems.map((p) => `${p.target}: ${p.message} ${p.fix}`).join(' ');
+  if (r.ok) return { ok: true, design: r.design, summary: `${met} of ${r.rows.length} trip points within the allowance` };
+  if (r.rows.length > 0 && r.design !== design) return { ok: true, design: r.design, summary: `${met} of ${r.rows.length} trip points met; ${problems}` };
+  return { ok: false, message: problems || 'the targets cannot be planned' };
+}
 
 /** The capability services available in this build. */
 export function capabilities(): Pick<Services, 'plan' | 'spread' | 'exportDesign'> {
-  return {};
+  return {
+    plan: planDesign,
+    spread: (design, onProgress) => {
+      const abort = new AbortController();
+      const result = runSpreadParallel(design, { trials: SCREEN_TRIALS, signal: abort.signal, onProgress }).then(
+        (out) => summarizeSpread(out.report),
+        (e: Error) => {
+          if (e.name === 'AbortError') return null;
+          throw e;
+        },
+      );
+      return { result, cancel: () => abort.abort() };
+    },
+  };
 }

@@ -118,7 +118,7 @@ export const KEYMAP: readonly Binding[] = [
 
   { action: 'quit-save', keys: [ch('s')], scope: 'quit', description: 'save, then quit', hint: 'save and quit' },
   { action: 'quit-discard', keys: [ch('y')], scope: 'quit', description: 'quit without saving (the draft is dropped)', hint: 'quit, drop changes' },
-  { action: 'quit-stay', keys: [ch('n'), named('escape')], scope: 'quit', description: 'stay', hint: 'stay' },
+  { action: 'quit-stay', keys: [ch('n'), named('escape')], scope: 'quit', description: 'stay and keep editing', hint: 'stay' },
   { action: 'interrupt', keys: [{ ctrl: 'c' }], scope: 'quit', description: 'quit now and keep the draft for next time' },
 
   { action: 'draft-restore', keys: [ch('y')], scope: 'draft', description: 'restore the unsaved edits', hint: 'restore' },

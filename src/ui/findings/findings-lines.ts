@@ -4,7 +4,7 @@
  */
 import type { Finding } from '../../engine/analysis-types';
 import type { Design } from '../../engine/design/types';
-import type { SpreadStatus } from '../state/app-state';
+import type { Range, SpreadStatus } from '../state/app-state';
 import { fmtX } from '../format';
 
 /** One entry: a tag ("ERR", "WARN", "info", "CAUTION", "spread") and its text; `detail` is shown when selected. */
@@ -28,18 +28,22 @@ export function batteryCautions(d: Design): FindingLine[] {
   return out;
 }
 
+function worst(r: Range | null, d: Design, ascii: boolean): string {
+  return r && r.worstMin !== null && r.worstMax !== null ? range(r.worstMin, r.worstMax, d, ascii) : 'not computed';
+}
+
 function range(lo: number, hi: number, d: Design, ascii: boolean): string {
   return `${fmtX(lo, d, ascii)}..${fmtX(hi, d, ascii)}`;
 }
 
-/** Lines for a finished spread: per channel, the 5-95 % range and extremes of each trip point. */
+/** Lines for a finished spread: per channel, the ±3 sigma range of each trip point; extremes and worst case when selected. */
 export function spreadLines(s: SpreadStatus, d: Design, ascii: boolean): FindingLine[] {
   if (s.state === 'failed') return [{ tag: 'spread', text: `spread failed: ${s.message}` }];
   if (s.state !== 'done') return [];
   return s.result.channels.map((c) => ({
     tag: 'spread' as const,
-    text: `${c.id} rise ${c.rising ? range(c.rising.p5, c.rising.p95, d, ascii) : '-'}  fall ${c.falling ? range(c.falling.p5, c.falling.p95, d, ascii) : '-'}`,
-    detail: `${s.result.trials} trials; 5-95 % shown; extremes rise ${c.rising ? range(c.rising.min, c.rising.max, d, ascii) : '-'}, fall ${c.falling ? range(c.falling.min, c.falling.max, d, ascii) : '-'}`,
+    text: `${c.id} rise ${c.rising ? range(c.rising.lo, c.rising.hi, d, ascii) : '-'}  fall ${c.falling ? range(c.falling.lo, c.falling.hi, d, ascii) : '-'}`,
+    detail: `${s.result.trials} trials, ±3 sigma shown; worst case rise ${worst(c.rising, d, ascii)}, fall ${worst(c.falling, d, ascii)}`,
   }));
 }
 

@@ -41,12 +41,16 @@ export interface SpreadSummary {
   channels: { id: string; rising: Range | null; falling: Range | null }[];
 }
 
-/** Extremes and central 90 % of one trip point (unit of x). */
+/** Spread of one trip point (unit of x): Monte Carlo extremes and ±3 sigma points, worst-case bounds. */
 export interface Range {
   min: number;
   max: number;
-  p5: number;
-  p95: number;
+  /** 0.135th and 99.865th percentiles. */
+  lo: number;
+  hi: number;
+  /** Worst-case bounds when computed. */
+  worstMin: number | null;
+  worstMax: number | null;
 }
 
 /** A transient line under the panes. */

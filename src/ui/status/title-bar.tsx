@@ -20,7 +20,8 @@ export function TitleBar({ state, width, theme }: TitleBarProps) {
       { text: 'tapline ', style: theme.title(true) },
       { text: state.name },
       { text: isModified(state) ? ' [modified]' : '', style: theme.modified() },
-      { text: `  ${d.series} ${tol}  ${d.part.id}${spread}`, style: theme.muted() },
+      { text: spread, style: theme.modified() },
+      { text: `  ${d.series} ${tol}  ${d.part.id}`, style: theme.muted() },
     ]} />
   );
 }
