@@ -5,6 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { tripRows } from '../../src/engine/export/trip-rows';
+import { plan } from '../../src/engine/planner';
 import { loadPresets } from '../helpers/presets';
 
 const presets = loadPresets();
@@ -34,6 +35,12 @@ describe.each(presets)('preset $id', (p) => {
       expect(row.error, `${row.channel} ${row.edge}`).not.toBeNull();
       expect(Math.abs(row.error!), `${row.channel} ${row.edge}`).toBeLessThanOrEqual(allowance);
     }
+  });
+
+  it('states targets the planner can realise', () => {
+    const planned = plan(p.design);
+    expect(planned.problems).toEqual([]);
+    expect(planned.ok).toBe(true);
   });
 
   it('keeps its trip points, hysteresis and currents', () => {
