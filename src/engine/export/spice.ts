@@ -114,7 +114,8 @@ export function spiceNetlist(design: Design, prepared: Prepared = prepare(design
     lines.push(`.meas tran ${m.name} FIND v(x) WHEN v(q_${m.unit.toLowerCase()})=0.5${td} ${dir}=1 $ ${m.edge}, engine ${n(m.x)}`);
   }
   lines.push('.end', '');
-  return lines.join('\n');
+  // Inline comments are not portable across simulators: each becomes a comment line above its card.
+  return lines.flatMap((l) => (l.includes(' $ ') ? [`* ${l.slice(l.indexOf(' $ ') + 3)}`, l.slice(0, l.indexOf(' $ '))] : [l])).join('\n');
 }
 
 function diodeLines(d: NetDiode, ds: Designators, node: (k: number) => string): string[] {

@@ -21,8 +21,8 @@ describe('spiceNetlist', () => {
   });
 
   it('writes each string resistor with its conventional designator and exact value', () => {
-    expect(text).toMatch(/^R1 ref t1 20000 \$ RS1$/m);
-    expect(text).toMatch(/^R5 t4 0 20000 \$ RS5$/m);
+    expect(text).toMatch(/^\* RS1\nR1 ref t1 20000$/m);
+    expect(text).toMatch(/^\* RS5\nR5 t4 0 20000$/m);
   });
 
   it('models each comparator as an offset source, a switch and its saturation source', () => {
@@ -31,8 +31,12 @@ describe('spiceNetlist', () => {
   });
 
   it('models each LED as resistor, near-ideal diode, knee source and dynamic resistance', () => {
-    expect(text).toMatch(/^D_D1 d1_r d1_j DIDEAL/m);
+    expect(text).toMatch(/^D_D1 d1_r d1_j DIDEAL$/m);
     expect(text).toMatch(/^VK_D1 d1_j d1_k DC 1.9$/m);
+  });
+
+  it('uses no inline comments, only whole comment lines', () => {
+    expect(text).not.toContain(' $ ');
   });
 
   it('states one .meas per channel and direction', () => {
