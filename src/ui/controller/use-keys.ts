@@ -1,4 +1,5 @@
 import { type Key, useInput } from 'ink';
+import { useRef } from 'react';
 import { activeScope, findBinding, type KeyContext, keyName, whyDisabled } from '../keymap';
 import type { Controller } from './use-controller';
 
@@ -25,8 +26,13 @@ function printable(input: string): string {
  * Maps keys to key-table actions for the topmost scope. A disabled action says why instead of
  * acting; in a prompt, keys that are not bound are typed text.
  */
-export function useKeys({ ctx, controller, onType, onRefused, isActive, ascii }: KeysOptions): void {
+export function useKeys(options: KeysOptions): void {
+  // Keys are read against the latest render's state through a ref, not a closure: the listener
+  // Ink re-subscribes after each render runs in a passive effect, which can lag behind fast typing.
+  const latest = useRef(options);
+  latest.current = options;
   const handle = (input: string, key: Key) => {
+    const { ctx, controller, onType, onRefused, isActive, ascii } = latest.current;
     const scope = activeScope(ctx.state);
     const binding = findBinding(scope, input, key);
     if (!isActive && binding?.action !== 'quit' && binding?.action !== 'interrupt') return;
@@ -47,7 +53,7 @@ export function useKeys({ ctx, controller, onType, onRefused, isActive, ascii }:
   useInput((input, key) => {
     // Keys typed faster than a frame (or sent by a script) arrive as one chunk of text: outside a
     // prompt each character is its own key.
-    if (activeScope(ctx.state) !== 'prompt' && input.length > 1 && !key.ctrl && !key.meta && [...input].length > 1) {
+    if (activeScope(latest.current.ctx.state) !== 'prompt' && input.length > 1 && !key.ctrl && !key.meta && [...input].length > 1) {
       for (const c of input) handle(c, { ...key, shift: /[A-Z]/.test(c) });
       return;
     }
