@@ -1,3 +1,5 @@
+import { choleskyEnvelope2, luSolve2 } from './factor';
+import { envelopeStarts, reverseCuthillMcKee } from './ordering';
 import { GND, type Network } from './types';
 
 /** Conductance from every node to ground that keeps floating nodes defined (S). */
@@ -29,18 +31,18 @@ export interface Solution {
 
 /**
  * Two-terminal branches in flat arrays: current from a[k] to b[k] = g[k]·(V(a) − V(b) − e[k]).
- * Flat typed arrays keep the per-state work free of object lookups.
+ * Flat arrays keep the per-state work free of object lookups.
  */
 class Branches {
-  readonly a: Int32Array;
-  readonly b: Int32Array;
-  readonly g: Float64Array;
-  readonly e: Float64Array;
+  readonly a: number[];
+  readonly b: number[];
+  readonly g: number[];
+  readonly e: number[];
   constructor(count: number) {
-    this.a = new Int32Array(count);
-    this.b = new Int32Array(count);
-    this.g = new Float64Array(count);
-    this.e = new Float64Array(count);
+    this.a = new Array<number>(count).fill(GND);
+    this.b = new Array<number>(count).fill(GND);
+    this.g = new Array<number>(count).fill(0);
+    this.e = new Array<number>(count).fill(0);
   }
   set(k: number, a: number, b: number, g: number, e: number): void {
     this.a[k] = a;
@@ -48,6 +50,64 @@ class Branches {
     this.g[k] = g;
     this.e[k] = e;
   }
+}
+
+/**
+ * Hands out views of one backing buffer, so the many small arrays of a solver and its solutions cost
+ * one allocation instead of one (off-heap, garbage-collected) buffer each.
+ */
+class Arena {
+  private buffer: Float64Array;
+  private used = 0;
+  constructor(private readonly chunk: number) {
+    this.buffer = new Float64Array(chunk);
+  }
+  /** A zeroed view of `length` doubles. */
+  take(length: number): Float64Array {
+    if (this.used + length > this.buffer.length) {
+      this.buffer = new Float64Array(Math.max(this.chunk, length));
+      this.used = 0;
+    }
+    const view = this.buffer.subarray(this.used, this.used + length);
+    this.used += length;
+    return view;
+  }
+}
+
+/**
+ * The part of a solver that depends only on the network's wiring, not its values: which nodes are
+ * unknowns, their envelope-friendly numbering and each row's envelope start. Networks that differ
+ * only in element values (spread trials) share one layout.
+ */
+export interface SolverLayout {
+  /** Unknown index of every node, or -1 when a source holds it. */
+  slot: Int32Array;
+  /** Number of unknowns. */
+  nu: number;
+  /** Envelope start of every row of the reordered matrix. */
+  first: Int32Array;
+}
+
+/** Computes the layout of `net` (see SolverLayout). */
+export function solverLayout(net: Network): SolverLayout {
+  const n = net.nodes.length;
+  const slot = new Int32Array(n);
+  for (const s of net.vsources) slot[s.node] = -1;
+  let nu = 0;
+  for (let k = 0; k < n; k++) slot[k] = slot[k] < 0 ? -1 : nu++;
+  const edges: [number, number][] = [];
+  const link = (a: number, b: number) => {
+    const sa = a === GND ? -1 : slot[a];
+    const sb = b === GND ? -1 : slot[b];
+    if (sa >= 0 && sb >= 0 && sa !== sb) edges.push([sa, sb]);
+  };
+  for (const r of net.resistors) link(r.a, r.b);
+  for (const c of net.comparators) if (c.pushPull) link(c.out, net.supply);
+  for (const d of net.diodes) link(d.anode, d.cathode);
+  // Renumber the unknowns so every state's matrix factors inside narrow row envelopes.
+  const index = reverseCuthillMcKee(nu, edges);
+  for (let k = 0; k < n; k++) if (slot[k] >= 0) slot[k] = index[slot[k]];
+  return { slot, nu, first: envelopeStarts(nu, edges, index) };
 }
 
 /**
@@ -63,6 +123,12 @@ export class Solver {
   /** Unknown index of every node, or -1 when a source holds it. */
   private readonly slot: Int32Array;
   private readonly nu: number;
+  private readonly first: Int32Array;
+  /** Comparator pins and offsets, flattened for the margin loop. */
+  private readonly cPlus: number[];
+  private readonly cMinus: number[];
+  private readonly cVos: number[];
+  private readonly arena: Arena;
   private readonly held0: Float64Array;
   private readonly held1: Float64Array;
   private readonly baseA: Float64Array;
@@ -74,36 +140,38 @@ export class Solver {
   private readonly fixed: Branches;
   private readonly on: Branches;
   private readonly off: Branches;
-  private readonly hasOff: Uint8Array;
+  private readonly hasOff: boolean[];
   private readonly work: Float64Array;
   private readonly r0: Float64Array;
   private readonly r1: Float64Array;
   private readonly cache = new Map<number | string, Solution>();
 
-  constructor(net: Network) {
+  /** Prepares `net`; pass the layout of an identically wired network to skip recomputing it. */
+  constructor(net: Network, layout: SolverLayout = solverLayout(net)) {
     this.net = net;
     const n = net.nodes.length;
     this.size = n;
-    this.held0 = new Float64Array(n);
-    this.held1 = new Float64Array(n);
-    const isHeld = new Uint8Array(n);
+    const count = net.comparators.length + net.diodes.length;
+    const perSolution = 2 * (n + net.vsources.length) + 2 * count;
+    this.arena = new Arena(2 * layout.nu * layout.nu + 4 * layout.nu + 4 * n + 24 * perSolution);
+    this.held0 = this.arena.take(n);
+    this.held1 = this.arena.take(n);
     for (const s of net.vsources) {
-      isHeld[s.node] = 1;
       this.held0[s.node] = s.c0;
       this.held1[s.node] = s.c1;
     }
-    this.slot = new Int32Array(n);
-    let nu = 0;
-    for (let k = 0; k < n; k++) this.slot[k] = isHeld[k] ? -1 : nu++;
+    this.slot = layout.slot;
+    this.first = layout.first;
+    const nu = layout.nu;
     this.nu = nu;
-    this.baseA = new Float64Array(nu * nu);
-    this.work = new Float64Array(nu * nu);
-    this.baseR0 = new Float64Array(nu);
-    this.baseR1 = new Float64Array(nu);
-    this.r0 = new Float64Array(nu);
-    this.r1 = new Float64Array(nu);
-    this.inj0 = new Float64Array(n);
-    this.inj1 = new Float64Array(n);
+    this.baseA = this.arena.take(nu * nu);
+    this.work = this.arena.take(nu * nu);
+    this.baseR0 = this.arena.take(nu);
+    this.baseR1 = this.arena.take(nu);
+    this.r0 = this.arena.take(nu);
+    this.r1 = this.arena.take(nu);
+    this.inj0 = this.arena.take(n);
+    this.inj1 = this.arena.take(n);
     for (let i = 0; i < nu; i++) this.baseA[i * nu + i] += GMIN;
     for (const s of net.isources) {
       this.inject(s.from, -s.c0, -s.c1);
@@ -124,19 +192,21 @@ export class Solver {
       this.fixed.set(k, r.a, r.b, 1 / r.ohms, 0);
       this.stamp(this.baseA, this.baseR0, this.baseR1, this.fixed, k);
     });
-    const count = net.comparators.length + net.diodes.length;
     this.on = new Branches(count);
     this.off = new Branches(count);
-    this.hasOff = new Uint8Array(count);
+    this.hasOff = new Array<boolean>(count).fill(false);
     net.comparators.forEach((c, k) => {
       this.on.set(k, c.out, GND, 1 / c.rsat, c.vsat0);
       if (c.pushPull) {
         this.off.set(k, c.out, net.supply, 1 / c.rout, -c.vohDrop);
-        this.hasOff[k] = 1;
+        this.hasOff[k] = true;
       }
     });
     const nc = net.comparators.length;
     net.diodes.forEach((d, k) => this.on.set(nc + k, d.anode, d.cathode, 1 / (d.rSeries + d.rdyn), d.knee));
+    this.cPlus = net.comparators.map((c) => c.plus);
+    this.cMinus = net.comparators.map((c) => c.minus);
+    this.cVos = net.comparators.map((c) => c.vos);
   }
 
   /** Solves the network in `state`, from the cache when it has been solved before. */
@@ -198,27 +268,28 @@ export class Solver {
   private factorAndSolve(state: State): Solution {
     const { net, size: n, nu, r0, r1 } = this;
     this.stampState(state);
-    let ok = choleskySolve2(this.work, nu, r0, r1);
+    let ok = choleskyEnvelope2(this.work, nu, this.first, r0, r1);
     if (!ok) {
       this.stampState(state);
       ok = luSolve2(this.work, nu, r0, r1);
     }
     const m = net.vsources.length;
-    const v0 = new Float64Array(n + m);
-    const v1 = new Float64Array(n + m);
+    const v0 = this.arena.take(n + m);
+    const v1 = this.arena.take(n + m);
     for (let k = 0; k < n; k++) {
       const s = this.slot[k];
       v0[k] = s < 0 ? this.held0[k] : r0[s];
       v1[k] = s < 0 ? this.held1[k] : r1[s];
     }
     for (let j = 0; j < m; j++) this.sourceCurrent(v0, v1, state, j);
-    const nc = net.comparators.length;
-    const da = new Float64Array(state.length);
-    const db = new Float64Array(state.length);
+    const nc = this.cPlus.length;
+    const da = this.arena.take(state.length);
+    const db = this.arena.take(state.length);
     for (let k = 0; k < nc; k++) {
-      const c = net.comparators[k];
-      da[k] = at(v0, c.minus) - at(v0, c.plus) - c.vos;
-      db[k] = at(v1, c.minus) - at(v1, c.plus);
+      const p = this.cPlus[k];
+      const q = this.cMinus[k];
+      da[k] = at(v0, q) - at(v0, p) - this.cVos[k];
+      db[k] = at(v1, q) - at(v1, p);
     }
     const on = this.on;
     for (let k = nc; k < state.length; k++) {
@@ -231,24 +302,25 @@ export class Solver {
   /** Current source j delivers: what leaves its node through the branches, minus injections. */
   private sourceCurrent(v0: Float64Array, v1: Float64Array, state: State, j: number): void {
     const node = this.net.vsources[j].node;
-    const n = this.size;
-    const acc = { i0: -this.inj0[node], i1: -this.inj1[node] };
-    const add = (br: Branches, k: number) => {
-      const a = br.a[k];
-      const b = br.b[k];
-      const sign = a === node ? 1 : b === node ? -1 : 0;
-      if (!sign) return;
-      acc.i0 += sign * br.g[k] * (at(v0, a) - at(v0, b) - br.e[k]);
-      acc.i1 += sign * br.g[k] * (at(v1, a) - at(v1, b));
-    };
-    for (let k = 0; k < this.fixed.g.length; k++) add(this.fixed, k);
+    const sums = new Float64Array([-this.inj0[node], -this.inj1[node]]);
+    for (let k = 0; k < this.fixed.g.length; k++) addBranchCurrent(sums, this.fixed, k, node, v0, v1);
     for (let k = 0; k < state.length; k++) {
-      if (state[k]) add(this.on, k);
-      else if (this.hasOff[k]) add(this.off, k);
+      if (state[k]) addBranchCurrent(sums, this.on, k, node, v0, v1);
+      else if (this.hasOff[k]) addBranchCurrent(sums, this.off, k, node, v0, v1);
     }
-    v0[n + j] = acc.i0;
-    v1[n + j] = acc.i1;
+    v0[this.size + j] = sums[0];
+    v1[this.size + j] = sums[1];
   }
+}
+
+/** Adds the current leaving `node` through branch k (constant and per-x parts) to `sums`. */
+function addBranchCurrent(sums: Float64Array, br: Branches, k: number, node: number, v0: Float64Array, v1: Float64Array): void {
+  const a = br.a[k];
+  const b = br.b[k];
+  const sign = a === node ? 1 : b === node ? -1 : 0;
+  if (sign === 0) return;
+  sums[0] += sign * br.g[k] * (at(v0, a) - at(v0, b) - br.e[k]);
+  sums[1] += sign * br.g[k] * (at(v1, a) - at(v1, b));
 }
 
 function at(vec: Float64Array, node: number): number {
@@ -271,107 +343,6 @@ export function stateKey(state: State): string {
   let key = '';
   for (let k = 0; k < state.length; k++) key += state[k] ? '1' : '0';
   return key;
-}
-
-/**
- * Cholesky factorisation of the symmetric positive definite `a` (size×size, row-major, lower
- * triangle used and overwritten), solving for two right-hand sides in place. Returns false when a
- * pivot is not positive.
- */
-export function choleskySolve2(a: Float64Array, size: number, b0: Float64Array, b1: Float64Array): boolean {
-  for (let j = 0; j < size; j++) {
-    const rj = j * size;
-    let d = a[rj + j];
-    for (let k = 0; k < j; k++) d -= a[rj + k] * a[rj + k];
-    if (!(d > 0)) return false;
-    const l = Math.sqrt(d);
-    a[rj + j] = l;
-    for (let i = j + 1; i < size; i++) {
-      const ri = i * size;
-      let s = a[ri + j];
-      for (let k = 0; k < j; k++) s -= a[ri + k] * a[rj + k];
-      a[ri + j] = s / l;
-    }
-  }
-  for (let i = 0; i < size; i++) {
-    const ri = i * size;
-    let s0 = b0[i];
-    let s1 = b1[i];
-    for (let k = 0; k < i; k++) {
-      s0 -= a[ri + k] * b0[k];
-      s1 -= a[ri + k] * b1[k];
-    }
-    b0[i] = s0 / a[ri + i];
-    b1[i] = s1 / a[ri + i];
-  }
-  for (let i = size - 1; i >= 0; i--) {
-    let s0 = b0[i];
-    let s1 = b1[i];
-    for (let k = i + 1; k < size; k++) {
-      s0 -= a[k * size + i] * b0[k];
-      s1 -= a[k * size + i] * b1[k];
-    }
-    b0[i] = s0 / a[i * size + i];
-    b1[i] = s1 / a[i * size + i];
-  }
-  return true;
-}
-
-/**
- * Dense LU with partial pivoting on the row-major `m` (size×size), solving for two right-hand sides
- * in place. Returns false (leaving zeros) when a pivot vanishes.
- */
-export function luSolve2(m: Float64Array, size: number, b0: Float64Array, b1: Float64Array): boolean {
-  for (let col = 0; col < size; col++) {
-    let pivot = col;
-    let best = Math.abs(m[col * size + col]);
-    for (let r = col + 1; r < size; r++) {
-      const v = Math.abs(m[r * size + col]);
-      if (v > best) {
-        best = v;
-        pivot = r;
-      }
-    }
-    if (!(best > 1e-300)) {
-      b0.fill(0);
-      b1.fill(0);
-      return false;
-    }
-    if (pivot !== col) {
-      for (let c = 0; c < size; c++) {
-        const t = m[col * size + c];
-        m[col * size + c] = m[pivot * size + c];
-        m[pivot * size + c] = t;
-      }
-      let t = b0[col];
-      b0[col] = b0[pivot];
-      b0[pivot] = t;
-      t = b1[col];
-      b1[col] = b1[pivot];
-      b1[pivot] = t;
-    }
-    const d = m[col * size + col];
-    for (let r = col + 1; r < size; r++) {
-      const f = m[r * size + col] / d;
-      if (f === 0) continue;
-      m[r * size + col] = 0;
-      for (let c = col + 1; c < size; c++) m[r * size + c] -= f * m[col * size + c];
-      b0[r] -= f * b0[col];
-      b1[r] -= f * b1[col];
-    }
-  }
-  for (let r = size - 1; r >= 0; r--) {
-    let s0 = b0[r];
-    let s1 = b1[r];
-    for (let c = r + 1; c < size; c++) {
-      s0 -= m[r * size + c] * b0[c];
-      s1 -= m[r * size + c] * b1[c];
-    }
-    const d = m[r * size + r];
-    b0[r] = s0 / d;
-    b1[r] = s1 / d;
-  }
-  return true;
 }
 
 /** Voltage of `node` (GND allowed) in a solution, as the affine pair [c0, c1]. */
