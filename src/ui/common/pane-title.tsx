@@ -24,7 +24,8 @@ export function PaneTitle({ title, note, isFocused, width, theme }: PaneTitlePro
   return (
     <Text wrap="truncate-end">
       <Text {...theme.title(isFocused)}>{head}</Text>
-      <Text {...theme.muted()}>{noteText}{rule}</Text>
+      <Text {...theme.muted()}>{noteText}</Text>
+      {rule}
     </Text>
   );
 }
