@@ -31,8 +31,8 @@ export function voltAt(sol: Solution, node: number, x: number): number {
 
 /** Current the supply source delivers at x, plus part quiescent current (A). */
 export function supplyCurrentAt(p: Prepared, sol: Solution, x: number): number {
-  const row = p.net.nodes.length + p.net.supplySource;
-  return sol.v0[row] + sol.v1[row] * x + p.net.quiescent;
+  const [i0, i1] = p.solver.sourceCurrent(sol, p.net.supplySource);
+  return i0 + i1 * x + p.net.quiescent;
 }
 
 /** The state the circuit is in at x on the given sweep direction. */

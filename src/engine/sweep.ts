@@ -1,4 +1,5 @@
-import { nodeAffine, type Solver, type State } from './network/solve';
+import type { Solution, Solver, State } from './network/solve';
+import { GND } from './network/types';
 
 /** Sweep direction: x rising or falling. */
 export type Direction = 'up' | 'down';
@@ -117,6 +118,10 @@ function pushSegment(out: SweepResult, dir: Direction, a: number, b: number, sta
   out.segments.push({ direction: dir, from, to, state: state.slice() });
 }
 
+function voltageAt(sol: Solution, node: number, x: number): number {
+  return node === GND ? 0 : sol.v0[node] + sol.v1[node] * x;
+}
+
 function sameState(a: State, b: State): boolean {
   for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
   return true;
@@ -129,21 +134,22 @@ function sameState(a: State, b: State): boolean {
  */
 function settle(solver: Solver, start: State, x: number, dir: Direction, out: SweepResult, to: number): State {
   const sign = dir === 'up' ? 1 : -1;
-  const net = solver.net;
-  const nc = net.comparators.length;
+  const nc = solver.net.comparators.length;
   const seen: State[] = [];
   let state = start.slice();
   const limit = 4 * state.length + 8;
   for (let step = 0; step <= limit; step++) {
-    const repeat = seen.findIndex((s) => sameState(s, state));
-    if (repeat >= 0) return escapeBand(solver, seen.slice(repeat), x, dir, out, to);
+    for (let r = 0; r < seen.length; r++) {
+      if (sameState(seen[r], state)) return escapeBand(solver, seen.slice(r), x, dir, out, to);
+    }
     seen.push(state.slice());
     const sol = solver.solve(state);
+    const { da, db } = sol;
     let worst = -1;
     let amount = 0;
     for (let k = 0; k < state.length; k++) {
       const flip = state[k] ? 1 : -1;
-      const v = violation(sol.da[k] * flip, sol.db[k] * flip, x, sign);
+      const v = violation(da[k] * flip, db[k] * flip, x, sign);
       if (v > amount) {
         amount = v;
         worst = k;
@@ -153,11 +159,9 @@ function settle(solver: Solver, start: State, x: number, dir: Direction, out: Sw
     let pinPlus = 0;
     let pinMinus = 0;
     if (worst < nc) {
-      const c = net.comparators[worst];
-      const [p0, p1] = nodeAffine(sol, c.plus);
-      const [m0, m1] = nodeAffine(sol, c.minus);
-      pinPlus = p0 + p1 * x;
-      pinMinus = m0 + m1 * x;
+      const c = solver.net.comparators[worst];
+      pinPlus = voltageAt(sol, c.plus, x);
+      pinMinus = voltageAt(sol, c.minus, x);
     }
     state[worst] = state[worst] ? 0 : 1;
     out.flips.push({ element: worst, to: state[worst] === 1, x, direction: dir, pinPlus, pinMinus });

@@ -11,10 +11,7 @@ export const GMIN = 1e-15;
  */
 export type State = Uint8Array;
 
-/**
- * Node voltages of one state, affine in x: V(node) = v0[node] + x·v1[node]. Entries past the node
- * count are the currents the voltage sources deliver into their nodes (A), in `vsources` order.
- */
+/** Node voltages of one state, affine in x: V(node) = v0[node] + x·v1[node] (V). */
 export interface Solution {
   v0: Float64Array;
   v1: Float64Array;
@@ -27,6 +24,8 @@ export interface Solution {
   db: Float64Array;
   /** False when the system could not be solved for this state. */
   ok: boolean;
+  /** The state solved. */
+  state: State;
 }
 
 /**
@@ -58,11 +57,12 @@ class Branches {
  */
 class Arena {
   private buffer: Float64Array;
-  private used = 0;
+  /** Doubles handed out of the current buffer; may be wound back to reuse them. */
+  used = 0;
   constructor(private readonly chunk: number) {
     this.buffer = new Float64Array(chunk);
   }
-  /** A zeroed view of `length` doubles. */
+  /** A view of `length` doubles; callers overwrite it (reused storage is not zeroed). */
   take(length: number): Float64Array {
     if (this.used + length > this.buffer.length) {
       this.buffer = new Float64Array(Math.max(this.chunk, length));
@@ -113,22 +113,22 @@ export function solverLayout(net: Network): SolverLayout {
 /**
  * A network prepared for repeated solves. Nodes held by a voltage source are known (affine in x),
  * so only the remaining nodes are unknowns; their conductance matrix is symmetric positive definite
- * and is solved by Cholesky factorisation (pivoting LU as the fallback). The state-independent part
- * is stamped once; each state adds only its own branches. Solutions are cached per state.
+ * and is solved by Cholesky factorisation inside row envelopes (pivoting LU as the fallback). The
+ * state-independent part is stamped once; each state adds only its own branches. Solutions are
+ * cached per state. `load` re-values the solver for an identically wired network (spread trials),
+ * reusing every buffer.
  */
 export class Solver {
-  readonly net: Network;
+  net: Network;
   /** Node count. */
   readonly size: number;
-  /** Unknown index of every node, or -1 when a source holds it. */
   private readonly slot: Int32Array;
   private readonly nu: number;
   private readonly first: Int32Array;
-  /** Comparator pins and offsets, flattened for the margin loop. */
-  private readonly cPlus: number[];
-  private readonly cMinus: number[];
-  private readonly cVos: number[];
+  private readonly count: number;
   private readonly arena: Arena;
+  /** Arena mark after the fixed buffers: solutions are taken from here on. */
+  private readonly mark: number;
   private readonly held0: Float64Array;
   private readonly held1: Float64Array;
   private readonly baseA: Float64Array;
@@ -136,77 +136,100 @@ export class Solver {
   private readonly baseR1: Float64Array;
   private readonly inj0: Float64Array;
   private readonly inj1: Float64Array;
+  private readonly work: Float64Array;
+  private readonly r0: Float64Array;
+  private readonly r1: Float64Array;
   /** Fixed branches (resistors) and, per element, the branch it adds when set (on) or clear (off). */
   private readonly fixed: Branches;
   private readonly on: Branches;
   private readonly off: Branches;
   private readonly hasOff: boolean[];
-  private readonly work: Float64Array;
-  private readonly r0: Float64Array;
-  private readonly r1: Float64Array;
+  /** Comparator pins and offsets, flattened for the margin loop. */
+  private readonly cPlus: number[];
+  private readonly cMinus: number[];
+  private readonly cVos: number[];
   private readonly cache = new Map<number | string, Solution>();
 
   /** Prepares `net`; pass the layout of an identically wired network to skip recomputing it. */
   constructor(net: Network, layout: SolverLayout = solverLayout(net)) {
     this.net = net;
     const n = net.nodes.length;
+    const nu = layout.nu;
     this.size = n;
-    const count = net.comparators.length + net.diodes.length;
-    const perSolution = 2 * (n + net.vsources.length) + 2 * count;
-    this.arena = new Arena(2 * layout.nu * layout.nu + 4 * layout.nu + 4 * n + 24 * perSolution);
-    this.held0 = this.arena.take(n);
-    this.held1 = this.arena.take(n);
-    for (const s of net.vsources) {
-      this.held0[s.node] = s.c0;
-      this.held1[s.node] = s.c1;
-    }
     this.slot = layout.slot;
     this.first = layout.first;
-    const nu = layout.nu;
     this.nu = nu;
+    this.count = net.comparators.length + net.diodes.length;
+    const perSolution = 2 * n + 2 * this.count;
+    this.arena = new Arena(2 * nu * nu + 6 * nu + 4 * n + 24 * perSolution);
+    this.held0 = this.arena.take(n);
+    this.held1 = this.arena.take(n);
+    this.inj0 = this.arena.take(n);
+    this.inj1 = this.arena.take(n);
     this.baseA = this.arena.take(nu * nu);
     this.work = this.arena.take(nu * nu);
     this.baseR0 = this.arena.take(nu);
     this.baseR1 = this.arena.take(nu);
     this.r0 = this.arena.take(nu);
     this.r1 = this.arena.take(nu);
-    this.inj0 = this.arena.take(n);
-    this.inj1 = this.arena.take(n);
-    for (let i = 0; i < nu; i++) this.baseA[i * nu + i] += GMIN;
+    this.mark = this.arena.used;
+    this.fixed = new Branches(net.resistors.length);
+    this.on = new Branches(this.count);
+    this.off = new Branches(this.count);
+    this.hasOff = new Array<boolean>(this.count).fill(false);
+    this.cPlus = net.comparators.map((c) => c.plus);
+    this.cMinus = net.comparators.map((c) => c.minus);
+    this.cVos = new Array<number>(net.comparators.length).fill(0);
+    this.load(net);
+  }
+
+  /**
+   * Takes the element values of `net`, which must be wired exactly like the network this solver was
+   * built for. Earlier solutions are dropped and their storage reused.
+   */
+  load(net: Network): void {
+    this.net = net;
+    this.cache.clear();
+    this.arena.used = this.mark;
+    const { nu, held0, held1, inj0, inj1, baseA, baseR0, baseR1 } = this;
+    held0.fill(0);
+    held1.fill(0);
+    inj0.fill(0);
+    inj1.fill(0);
+    baseA.fill(0);
+    baseR0.fill(0);
+    baseR1.fill(0);
+    for (const s of net.vsources) {
+      held0[s.node] = s.c0;
+      held1[s.node] = s.c1;
+    }
+    for (let i = 0; i < nu; i++) baseA[i * nu + i] = GMIN;
     for (const s of net.isources) {
       this.inject(s.from, -s.c0, -s.c1);
       this.inject(s.to, s.c0, s.c1);
     }
-    for (const c of net.comparators) {
+    net.comparators.forEach((c, k) => {
       this.inject(c.plus, c.ibPlus, 0);
       this.inject(c.minus, c.ibMinus, 0);
-    }
-    for (let k = 0; k < n; k++) {
-      const s = this.slot[k];
-      if (s < 0) continue;
-      this.baseR0[s] += this.inj0[k];
-      this.baseR1[s] += this.inj1[k];
-    }
-    this.fixed = new Branches(net.resistors.length);
-    net.resistors.forEach((r, k) => {
-      this.fixed.set(k, r.a, r.b, 1 / r.ohms, 0);
-      this.stamp(this.baseA, this.baseR0, this.baseR1, this.fixed, k);
-    });
-    this.on = new Branches(count);
-    this.off = new Branches(count);
-    this.hasOff = new Array<boolean>(count).fill(false);
-    net.comparators.forEach((c, k) => {
+      this.cVos[k] = c.vos;
       this.on.set(k, c.out, GND, 1 / c.rsat, c.vsat0);
       if (c.pushPull) {
         this.off.set(k, c.out, net.supply, 1 / c.rout, -c.vohDrop);
         this.hasOff[k] = true;
       }
     });
+    for (let k = 0; k < this.size; k++) {
+      const s = this.slot[k];
+      if (s < 0) continue;
+      baseR0[s] += inj0[k];
+      baseR1[s] += inj1[k];
+    }
+    net.resistors.forEach((r, k) => {
+      this.fixed.set(k, r.a, r.b, 1 / r.ohms, 0);
+      this.stamp(baseA, baseR0, baseR1, this.fixed, k);
+    });
     const nc = net.comparators.length;
     net.diodes.forEach((d, k) => this.on.set(nc + k, d.anode, d.cathode, 1 / (d.rSeries + d.rdyn), d.knee));
-    this.cPlus = net.comparators.map((c) => c.plus);
-    this.cMinus = net.comparators.map((c) => c.minus);
-    this.cVos = net.comparators.map((c) => c.vos);
   }
 
   /** Solves the network in `state`, from the cache when it has been solved before. */
@@ -217,6 +240,21 @@ export class Solver {
     const sol = this.factorAndSolve(state);
     this.cache.set(key, sol);
     return sol;
+  }
+
+  /**
+   * Current that voltage source j delivers into its node in `sol` (A), as the affine pair [c0, c1]:
+   * what leaves the node through every branch, minus what is injected there.
+   */
+  sourceCurrent(sol: Solution, j: number): [number, number] {
+    const node = this.net.vsources[j].node;
+    const sums = [-this.inj0[node], -this.inj1[node]];
+    for (let k = 0; k < this.fixed.g.length; k++) addBranchCurrent(sums, this.fixed, k, node, sol.v0, sol.v1);
+    for (let k = 0; k < this.count; k++) {
+      if (sol.state[k]) addBranchCurrent(sums, this.on, k, node, sol.v0, sol.v1);
+      else if (this.hasOff[k]) addBranchCurrent(sums, this.off, k, node, sol.v0, sol.v1);
+    }
+    return [sums[0], sums[1]];
   }
 
   private inject(node: number, i0: number, i1: number): void {
@@ -266,22 +304,20 @@ export class Solver {
   }
 
   private factorAndSolve(state: State): Solution {
-    const { net, size: n, nu, r0, r1 } = this;
+    const { size: n, nu, r0, r1 } = this;
     this.stampState(state);
     let ok = choleskyEnvelope2(this.work, nu, this.first, r0, r1);
     if (!ok) {
       this.stampState(state);
       ok = luSolve2(this.work, nu, r0, r1);
     }
-    const m = net.vsources.length;
-    const v0 = this.arena.take(n + m);
-    const v1 = this.arena.take(n + m);
+    const v0 = this.arena.take(n);
+    const v1 = this.arena.take(n);
     for (let k = 0; k < n; k++) {
       const s = this.slot[k];
       v0[k] = s < 0 ? this.held0[k] : r0[s];
       v1[k] = s < 0 ? this.held1[k] : r1[s];
     }
-    for (let j = 0; j < m; j++) this.sourceCurrent(v0, v1, state, j);
     const nc = this.cPlus.length;
     const da = this.arena.take(state.length);
     const db = this.arena.take(state.length);
@@ -296,25 +332,12 @@ export class Solver {
       da[k] = at(v0, on.a[k]) - at(v0, on.b[k]) - on.e[k];
       db[k] = at(v1, on.a[k]) - at(v1, on.b[k]);
     }
-    return { v0, v1, da, db, ok };
-  }
-
-  /** Current source j delivers: what leaves its node through the branches, minus injections. */
-  private sourceCurrent(v0: Float64Array, v1: Float64Array, state: State, j: number): void {
-    const node = this.net.vsources[j].node;
-    const sums = new Float64Array([-this.inj0[node], -this.inj1[node]]);
-    for (let k = 0; k < this.fixed.g.length; k++) addBranchCurrent(sums, this.fixed, k, node, v0, v1);
-    for (let k = 0; k < state.length; k++) {
-      if (state[k]) addBranchCurrent(sums, this.on, k, node, v0, v1);
-      else if (this.hasOff[k]) addBranchCurrent(sums, this.off, k, node, v0, v1);
-    }
-    v0[this.size + j] = sums[0];
-    v1[this.size + j] = sums[1];
+    return { v0, v1, da, db, ok, state: state.slice() };
   }
 }
 
 /** Adds the current leaving `node` through branch k (constant and per-x parts) to `sums`. */
-function addBranchCurrent(sums: Float64Array, br: Branches, k: number, node: number, v0: Float64Array, v1: Float64Array): void {
+function addBranchCurrent(sums: number[], br: Branches, k: number, node: number, v0: Float64Array, v1: Float64Array): void {
   const a = br.a[k];
   const b = br.b[k];
   const sign = a === node ? 1 : b === node ? -1 : 0;
@@ -343,9 +366,4 @@ export function stateKey(state: State): string {
   let key = '';
   for (let k = 0; k < state.length; k++) key += state[k] ? '1' : '0';
   return key;
-}
-
-/** Voltage of `node` (GND allowed) in a solution, as the affine pair [c0, c1]. */
-export function nodeAffine(sol: Solution, node: number): [number, number] {
-  return node === GND ? [0, 0] : [sol.v0[node], sol.v1[node]];
 }

@@ -5,7 +5,7 @@
  */
 import type { Design } from '../design/types';
 import { buildNetwork } from '../network/build';
-import { Solver, type SolverLayout, solverLayout } from '../network/solve';
+import { Solver } from '../network/solve';
 import type { Network } from '../network/types';
 import { sweep } from '../sweep';
 import { type Parameter, perturbNetwork, spreadParameters, type SpreadOptions } from './perturb';
@@ -18,8 +18,8 @@ export interface SpreadModel {
   params: Parameter[];
   /** Channel ids in network order; trip arrays use this order. */
   channels: string[];
-  /** Solver layout of the nominal network, shared by every perturbed copy (same wiring). */
-  layout: SolverLayout;
+  /** One solver re-valued for every perturbed copy (they share the nominal wiring). */
+  solver: Solver;
 }
 
 /** Trip points of one evaluation, per channel in model order (unit of x; NaN when absent). */
@@ -33,7 +33,7 @@ export interface TripSample {
 /** Builds the spread model of `design` with `options` (SpreadOptions). Pure. */
 export function buildSpreadModel(design: Design, options: SpreadOptions = {}): SpreadModel {
   const net = buildNetwork(design);
-  return { design, net, params: spreadParameters(design, net, options), channels: net.comparators.map((c) => c.id), layout: solverLayout(net) };
+  return { design, net, params: spreadParameters(design, net, options), channels: net.comparators.map((c) => c.id), solver: new Solver(net) };
 }
 
 /**
@@ -41,9 +41,10 @@ export function buildSpreadModel(design: Design, options: SpreadOptions = {}): S
  * transition into `rising`/`falling` at `offset + k` (unit of x; NaN when the channel never flips).
  * Returns true when a band with no stable state was found.
  */
-export function sweepTrips(design: Design, net: Network, rising: Float64Array, falling: Float64Array, offset = 0, layout?: SolverLayout): boolean {
+export function sweepTrips(design: Design, net: Network, rising: Float64Array, falling: Float64Array, offset = 0, solver?: Solver): boolean {
   const nc = net.comparators.length;
-  const result = sweep(new Solver(net, layout), design.quantity.min, design.quantity.max);
+  if (solver) solver.load(net);
+  const result = sweep(solver ?? new Solver(net), design.quantity.min, design.quantity.max);
   for (let k = 0; k < nc; k++) {
     rising[offset + k] = NaN;
     falling[offset + k] = NaN;
@@ -61,6 +62,6 @@ export function evaluateAt(model: SpreadModel, units: ArrayLike<number>): TripSa
   const n = model.channels.length;
   const rising = new Float64Array(n);
   const falling = new Float64Array(n);
-  const chatter = sweepTrips(model.design, perturbNetwork(model.net, model.params, units), rising, falling, 0, model.layout);
+  const chatter = sweepTrips(model.design, perturbNetwork(model.net, model.params, units), rising, falling, 0, model.solver);
   return { rising, falling, chatter };
 }

@@ -72,11 +72,14 @@ describe('Solver', () => {
   test('node voltages and source currents equal mathjs lusolve on 200 random networks (6 significant digits)', () => {
     for (let seed = 1; seed <= 200; seed++) {
       const { net, state } = randomNetwork(seed);
-      const sol = new Solver(net).solve(state);
+      const solver = new Solver(net);
+      const sol = solver.solve(state);
+      const n = net.nodes.length;
       for (const x of [0, 3.7]) {
         const ref = referenceVoltages(net, state, x);
         ref.forEach((v, k) => {
-          const got = sol.v0[k] + sol.v1[k] * x;
+          const [c0, c1] = k < n ? [sol.v0[k], sol.v1[k]] : solver.sourceCurrent(sol, k - n);
+          const got = c0 + c1 * x;
           expect(Math.abs(got - v)).toBeLessThanOrEqual(1e-6 * Math.max(1e-3, Math.abs(v)));
         });
       }
@@ -87,5 +90,18 @@ describe('Solver', () => {
     const { net, state } = randomNetwork(7);
     const solver = new Solver(net);
     expect(solver.solve(state)).toBe(solver.solve(state.slice()));
+  });
+
+  test('load re-values the solver for the same wiring: same answers as a fresh solver', () => {
+    const a = randomNetwork(11);
+    const b = randomNetwork(11);
+    b.net.resistors = b.net.resistors.map((r) => ({ ...r, ohms: r.ohms * 1.37 }));
+    const reused = new Solver(a.net);
+    reused.solve(a.state);
+    reused.load(b.net);
+    const fresh = new Solver(b.net).solve(b.state);
+    const again = reused.solve(b.state);
+    expect([...again.v0]).toEqual([...fresh.v0]);
+    expect([...again.v1]).toEqual([...fresh.v1]);
   });
 });
