@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 import { main } from './main';
-import type { CliIo } from './io';
+import type { CliIo } from '../io';
 
 const io: CliIo = {
   out: (text) => void process.stdout.write(text),

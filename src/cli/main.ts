@@ -4,7 +4,8 @@ import { exportCommand } from './commands/export';
 import { planCommand } from './commands/plan';
 import { presetsCommand } from './commands/presets';
 import { spreadCommand } from './commands/spread';
-import { EXIT, type CliIo, type Command } from './io';
+import { EXIT, type CliIo } from '../io';
+import type { Command } from './command';
 
 /** Version printed by --version; kept in step with package.json by the build. */
 export const VERSION = '0.1.0';

@@ -6,7 +6,7 @@
 import './production-mode';
 import { basename, resolve } from 'node:path';
 import { render } from 'ink';
-import { EXIT, type CliIo } from '../cli/io';
+import { EXIT, type CliIo } from '../io';
 import { DEMO_DESIGN_FILE, DEMO_FILE_NAME } from '../engine/design/demo';
 import { parseDesign } from '../engine/design/load';
 import { designToFile } from '../engine/design/save';

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { beforeEach, expect, test } from 'vitest';
 import preset from '../../presets/lead-acid-12v-gauge.tapline.json';
 import { main } from '../../src/cli/main';
-import type { CliIo } from '../../src/cli/io';
+import type { CliIo } from '../../src/io';
 import { parseDesignText } from '../../src/store/files';
 
 let dir: string;

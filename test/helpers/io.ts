@@ -1,4 +1,4 @@
-import type { CliIo } from '../../src/cli/io';
+import type { CliIo } from '../../src/io';
 
 /** A captured in-process CLI environment: what a command printed, for assertions. */
 export interface FakeIo extends CliIo {

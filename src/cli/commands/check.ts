@@ -3,7 +3,8 @@ import { resolve } from 'node:path';
 import { analyze } from '../../engine/analyze';
 import { checkReport, checkJson } from '../report/check-report';
 import { readDesignFile } from '../../store/files';
-import { EXIT, type CliIo, type Command } from '../io';
+import { EXIT, type CliIo } from '../../io';
+import type { Command } from '../command';
 
 const USAGE = `Usage: tapline check FILE [--json] [--ascii]
 

@@ -10,7 +10,8 @@ import { spiceNetlist } from '../../engine/export/spice';
 import { prepare } from '../../engine/prepare';
 import { runSpread } from '../../engine/spread';
 import { readDesignFile, writeFileAtomic } from '../../store/files';
-import { EXIT, type CliIo, type Command } from '../io';
+import { EXIT, type CliIo } from '../../io';
+import type { Command } from '../command';
 
 const FORMATS = ['spice', 'bom', 'report', 'json'] as const;
 type Format = (typeof FORMATS)[number];

@@ -3,7 +3,8 @@ import { parseArgs } from 'node:util';
 import { designToFile } from '../../engine/design/save';
 import { plan } from '../../engine/planner/index';
 import { readDesignFile, writeFileAtomic } from '../../store/files';
-import { EXIT, type CliIo, type Command } from '../io';
+import { EXIT, type CliIo } from '../../io';
+import type { Command } from '../command';
 import { planReport } from '../report/plan-report';
 
 const USAGE = `Usage: tapline plan FILE [--out FILE] [--in-place] [--json] [--ascii]

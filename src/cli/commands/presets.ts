@@ -1,7 +1,8 @@
 import { parseArgs } from 'node:util';
 import { relative } from 'node:path';
 import { listPresets } from '../../store/presets';
-import { EXIT, type CliIo, type Command } from '../io';
+import { EXIT, type CliIo } from '../../io';
+import type { Command } from '../command';
 
 const USAGE = `Usage: tapline presets [--json]
 

@@ -4,7 +4,8 @@ import { cautionsFor } from '../../engine/cautions';
 import { DEFAULT_TRIALS, type SpreadReport } from '../../engine/spread';
 import { readDesignFile } from '../../store/files';
 import { runSpreadParallel } from '../../workers/spread-pool';
-import { EXIT, type CliIo, type Command } from '../io';
+import { EXIT, type CliIo } from '../../io';
+import type { Command } from '../command';
 import { spreadJson, spreadText } from '../report/spread-report';
 
 const USAGE = `Usage: tapline spread FILE [--trials N] [--seed S] [--threads T] [--json] [--ascii]

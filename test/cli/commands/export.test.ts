@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { afterAll, describe, expect, it } from 'vitest';
 import { main } from '../../../src/cli/main';
-import type { CliIo } from '../../../src/cli/io';
+import type { CliIo } from '../../../src/io';
 import { PRESETS_DIR } from '../../helpers/presets';
 
 const dir = mkdtempSync(join(tmpdir(), 'tapline-export-'));

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { main } from '../../../src/cli/main';
-import type { CliIo } from '../../../src/cli/io';
+import type { CliIo } from '../../../src/io';
 import { PRESETS_DIR } from '../../helpers/presets';
 
 describe('tapline presets', () => {

@@ -1,4 +1,4 @@
-/** Streams and environment a command runs with, injected so commands can be tested in-process. */
+/** Streams and environment a command or the interactive screen runs with, injected so both can be tested in-process. */
 export interface CliIo {
   /** Standard output writer. */
   out: (text: string) => void;
@@ -21,12 +21,3 @@ export const EXIT = {
   /** Unreadable input: bad arguments, missing or invalid file. */
   input: 2,
 } as const;
-
-/** One sub-command: its name, one-line summary, usage text and entry point. */
-export interface Command {
-  name: string;
-  summary: string;
-  usage: string;
-  /** Runs the command with the arguments after its name; resolves to the exit code. */
-  run: (args: string[], io: CliIo) => Promise<number>;
-}
