@@ -8,7 +8,12 @@ import { create, unitDependencies, type Unit } from 'mathjs';
 
 export { formatEng, formatRkm } from './value-format.js';
 
-const math = create({ unitDependencies });
+/** The mathjs instance, made on first use: creating it costs more than the rest of start-up. */
+let lazyMath: ReturnType<typeof create> | null = null;
+function mathjs(): ReturnType<typeof create> {
+  lazyMath ??= create({ unitDependencies });
+  return lazyMath;
+}
 
 /** What a value is measured in: ohms, volts, amperes, watts, farads, a ratio (1 % = 0.01) or a bare number. */
 export type ValueUnit = 'ohm' | 'V' | 'A' | 'W' | 'F' | 'ratio' | 'none';
@@ -127,15 +132,15 @@ function readWithUnit(text: string, input: string, unit: ValueUnit): ParseResult
   const info = UNITS[unit];
   let parsed: Unit;
   try {
-    parsed = math.unit(text);
+    parsed = mathjs().unit(text);
   } catch {
     return fail(input, unit);
   }
   if (parsed.value === null) return fail(input, unit, `has no number`);
-  if (info.mathjs && parsed.equalBase(math.unit(info.mathjs))) {
+  if (info.mathjs && parsed.equalBase(mathjs().unit(info.mathjs))) {
     return { ok: true, value: clean(parsed.toNumber(info.mathjs)) };
   }
-  const found = DIMENSIONS.find(([name]) => parsed.equalBase(math.unit(name)));
+  const found = DIMENSIONS.find(([name]) => parsed.equalBase(mathjs().unit(name)));
   return fail(input, unit, found ? `is ${found[1]}, not ${info.noun}` : `has the wrong unit for ${info.noun}`);
 }
 

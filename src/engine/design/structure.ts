@@ -1,18 +1,16 @@
 /**
  * Structural check of a design file against `tapline.schema.json`, with each schema error turned
- * into one plain-language problem. The validator is compiled on first use only, so programs that
- * never open a file do not pay for it.
+ * into one plain-language problem. The validator is the schema compiled ahead of time by ajv
+ * (schema-validator.generated.js, kept in step by its test), so start-up does not pay for compiling.
  */
-import Ajv, { type ErrorObject, type ValidateFunction } from 'ajv';
+import type { ErrorObject, ValidateFunction } from 'ajv';
+import { validate as compiledValidator } from './schema-validator.generated.js';
 import schema from './tapline.schema.json';
 import type { DesignFile } from './file-types';
 import { joinPath, pointerToPath, showValue, type Problem } from './problems';
 
-let validator: ValidateFunction | undefined;
-
 function getValidator(): ValidateFunction {
-  validator ??= new Ajv({ allErrors: true, verbose: true, discriminator: true, strict: true, allowUnionTypes: true }).compile(schema);
-  return validator;
+  return compiledValidator;
 }
 
 type Schema = {
