@@ -26,10 +26,21 @@ const ENG_PREFIX: Record<number, string> = {
   [-15]: 'f', [-12]: 'p', [-9]: 'n', [-6]: 'µ', [-3]: 'm', 0: '', 3: 'k', 6: 'M', 9: 'G', 12: 'T',
 };
 
+/** Unit symbols that take SI prefixes; any other unit (%, °C, m of level, ...) is written plainly. */
+const PREFIXABLE = new Set(['', 'V', 'A', 'Ω', 'Ω', 'ohm', 'W', 'F', 'Hz', 's', 'Ah', 'Wh', 'J']);
+
+/** `value` to `digits` significant figures in plain decimal notation (no exponent, no prefix). */
+function plainDecimal(value: number, digits: number): string {
+  const magnitude = Math.floor(Math.log10(Math.abs(value)));
+  const decimals = Math.min(20, Math.max(0, digits - 1 - magnitude));
+  return value.toFixed(decimals);
+}
+
 /**
  * Engineering notation with an SI prefix: `formatEng(4700, 'Ω')` is "4.70 kΩ", 470e-6 A is
  * "470 µA", 0 V is "0 V". `value` is in SI units of `unit`, an unprefixed symbol ("Ω", "V", "A",
- * "W", "F"; "" gives "4.70k"); `digits` significant figures (default
+ * "W", "F"; "" gives "4.70k"; units that take no SI prefix, such as "%" or "°C", are written
+ * in plain decimals: 0.258 % stays "0.258 %"); `digits` significant figures (default
  * 3, trailing zeros kept); `ascii` writes u for µ and ohm for Ω. Non-finite values give "—" ("-"
  * in ascii). Magnitudes outside femto..tera fall back to exponent notation.
  */
@@ -40,6 +51,7 @@ export function formatEng(value: number, unit: string, opts: { digits?: number; 
   const symbol = ascii ? unit.replace(/[ΩΩ]/g, 'ohm').replace(/[µμ]/g, 'u') : unit;
   const gap = symbol ? ' ' : '';
   if (value === 0) return `0${gap}${symbol}`;
+  if (!PREFIXABLE.has(unit)) return `${plainDecimal(value, digits)}${gap}${symbol}`;
   const { ds, exp } = decompose(value, digits);
   const eng = Math.floor(exp / 3) * 3;
   if (!(eng in ENG_PREFIX)) return `${value.toExponential(digits - 1)}${gap}${symbol}`;

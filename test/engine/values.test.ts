@@ -166,3 +166,21 @@ describe('round trips', () => {
     },
   );
 });
+
+describe('formatEng for units that take no SI prefix', () => {
+  // SI Brochure (BIPM, 9th ed., §5.4.6): prefixes attach to SI unit symbols; % and °C are written
+  // as plain numbers (a prefixed "m%" is not a unit).
+  test('percent is written in plain decimals, never with a prefix', () => {
+    expect(formatEng(0.258, '%')).toBe('0.258 %');
+    expect(formatEng(26.19, '%')).toBe('26.2 %');
+  });
+
+  test('degrees Celsius keep the requested significant digits', () => {
+    expect(formatEng(80.16, '°C', { digits: 4 })).toBe('80.16 °C');
+    expect(formatEng(-10, '°C')).toBe('-10.0 °C');
+  });
+
+  test('large plain values are not rounded into exponent notation', () => {
+    expect(formatEng(1234.5, 'mm')).toBe('1235 mm');
+  });
+});
