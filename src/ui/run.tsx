@@ -3,7 +3,6 @@
  * a draft left by a crash, renders the app on the alternate screen, and always gives the terminal
  * back: on quit, on Ctrl+C, on a hang-up or termination signal, and on an internal error.
  */
-import './production-mode';
 import { basename, resolve } from 'node:path';
 import { render } from 'ink';
 import { EXIT, type CliIo } from '../io';

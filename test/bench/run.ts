@@ -2,6 +2,7 @@ import { cpus } from 'node:os';
 import { benchEngine } from './engine.bench';
 import { benchPlan } from './plan.bench';
 import { benchSpread } from './spread.bench';
+import { benchTui } from './tui.bench';
 import { type BenchResult, nodeStartMs } from './measure';
 
 /** `npm run bench`: every figure the issues promise, against its limit, beside `node -e 0`. */
@@ -9,7 +10,7 @@ async function run(): Promise<number> {
   const start = nodeStartMs();
   process.stdout.write(`tapline benchmarks on ${cpus().length} × ${cpus()[0]?.model ?? 'unknown cpu'}, node ${process.version}\n`);
   process.stdout.write(`node -e 0: ${start.toFixed(1)} ms (median of 7)\n\n`);
-  const results: BenchResult[] = [...(await benchEngine()), await benchPlan(), ...(await benchSpread())];
+  const results: BenchResult[] = [...(await benchEngine()), await benchPlan(), ...(await benchSpread()), ...(await benchTui())];
   let failed = 0;
   for (const r of results) {
     const isTime = r.medianMs !== undefined;
