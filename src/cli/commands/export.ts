@@ -1,23 +1,11 @@
 import { parseArgs } from 'node:util';
 import { resolve } from 'node:path';
-import { analyze } from '../../engine/analyze';
-import { cautionsFor } from '../../engine/cautions';
-import { bomCsv, bomTable, buildBom } from '../../engine/export/bom';
-import { assignDesignators } from '../../engine/export/designators';
-import { buildJsonExport } from '../../engine/export/json';
-import { buildReport, type ReportInput } from '../../engine/export/report';
-import { spiceNetlist } from '../../engine/export/spice';
-import { prepare } from '../../engine/prepare';
-import { runSpread } from '../../engine/spread';
+import { EXPORT_FORMATS as FORMATS, EXPORT_TRIALS, type ExportFormat as Format, exportText } from '../../engine/export/export-text';
 import { readDesignFile, writeFileAtomic } from '../../store/files';
 import { EXIT, type CliIo } from '../../io';
 import type { Command } from '../command';
 
-const FORMATS = ['spice', 'bom', 'report', 'json'] as const;
-type Format = (typeof FORMATS)[number];
-
-/** Monte Carlo trials the report and JSON exports run (seed 1, reproducible). */
-export const EXPORT_TRIALS = 2000;
+export { EXPORT_TRIALS };
 
 const USAGE = `Usage: tapline export FILE --to spice|bom|report|json [--out PATH] [--table]
 
@@ -71,26 +59,8 @@ export const exportCommand: Command = {
       io.err(`${read.message}\n`);
       return EXIT.input;
     }
-    const design = read.design;
-    const prepared = prepare(design);
-    const analysis = analyze(design, prepared);
-    const designators = assignDesignators(design);
-    const full = (): ReportInput => ({
-      design,
-      analysis,
-      designators,
-      spread: runSpread(design, { trials: EXPORT_TRIALS, seed: 1 }),
-      cautions: cautionsFor(design).map((c) => c.text),
-    });
     const format = v.to as Format;
-    const text =
-      format === 'spice'
-        ? spiceNetlist(design, prepared, designators)
-        : format === 'bom'
-          ? (v.table ? bomTable : bomCsv)(buildBom(design, analysis, designators))
-          : format === 'report'
-            ? buildReport(full())
-            : buildJsonExport(full());
+    const text = exportText({ design: read.design, format, isTable: v.table });
     if (!v.out) {
       io.out(text);
       return EXIT.ok;
