@@ -1,8 +1,7 @@
-import { parseArgs } from 'node:util';
-import { resolve } from 'node:path';
+import { basename } from 'node:path';
 import { analyze } from '../../engine/analyze';
 import { checkReport, checkJson } from '../report/check-report';
-import { readDesignFile } from '../../store/files';
+import { parseCommand, readDesignArg } from '../args';
 import { EXIT, type CliIo } from '../../io';
 import type { Command } from '../command';
 
@@ -24,30 +23,13 @@ export const checkCommand: Command = {
   summary: 'analyse a design: trip points, currents, findings',
   usage: 'tapline check FILE [--json]',
   async run(args: string[], io: CliIo): Promise<number> {
-    let parsed;
-    try {
-      parsed = parseArgs({ args, allowPositionals: true, options: { json: { type: 'boolean' }, ascii: { type: 'boolean' }, help: { type: 'boolean', short: 'h' } } });
-    } catch (e) {
-      io.err(`tapline check: ${(e as Error).message}\n${USAGE}`);
-      return EXIT.input;
-    }
-    if (parsed.values.help) {
-      io.out(USAGE);
-      return EXIT.ok;
-    }
-    if (parsed.positionals.length !== 1) {
-      io.err(`tapline check: give exactly one design file (got ${parsed.positionals.length}).\n${USAGE}`);
-      return EXIT.input;
-    }
-    const file = resolve(io.cwd, parsed.positionals[0]);
-    const read = await readDesignFile(file);
-    if (!read.ok) {
-      io.err(`${read.message}\n`);
-      return EXIT.input;
-    }
-    const analysis = analyze(read.design);
-    if (parsed.values.json) io.out(`${JSON.stringify(checkJson(read.design, analysis), null, 2)}\n`);
-    else io.out(checkReport(read.design, analysis, { ascii: parsed.values.ascii ?? false, fileName: parsed.positionals[0] }));
+    const parsed = parseCommand('check', USAGE, args, io, { json: { type: 'boolean' }, ascii: { type: 'boolean' } });
+    if ('exit' in parsed) return parsed.exit;
+    const design = await readDesignArg(parsed.file, io);
+    if (!design) return EXIT.input;
+    const analysis = analyze(design);
+    if (parsed.values.json) io.out(`${JSON.stringify(checkJson(design, analysis), null, 2)}\n`);
+    else io.out(checkReport(design, analysis, { ascii: parsed.values.ascii ?? false, fileName: basename(parsed.file) }));
     return analysis.findings.some((f) => f.severity === 'error') ? EXIT.findings : EXIT.ok;
   },
 };

@@ -1,8 +1,8 @@
-import { basename, resolve } from 'node:path';
-import { parseArgs } from 'node:util';
+import { relative, resolve } from 'node:path';
 import { designToFile } from '../../engine/design/save';
 import { plan } from '../../engine/planner/index';
-import { readDesignFile, writeFileAtomic } from '../../store/files';
+import { writeFileAtomic } from '../../store/files';
+import { parseCommand, readDesignArg } from '../args';
 import { EXIT, type CliIo } from '../../io';
 import type { Command } from '../command';
 import { planReport } from '../report/plan-report';
@@ -35,44 +35,23 @@ export const planCommand: Command = {
   summary: 'turn targets into a realised design',
   usage: 'tapline plan FILE [--out FILE] [--json]',
   async run(args: string[], io: CliIo): Promise<number> {
-    let parsed;
-    try {
-      parsed = parseArgs({
-        args,
-        allowPositionals: true,
-        options: {
-          out: { type: 'string' },
-          'in-place': { type: 'boolean' },
-          json: { type: 'boolean' },
-          ascii: { type: 'boolean' },
-          help: { type: 'boolean', short: 'h' },
-        },
-      });
-    } catch (e) {
-      io.err(`tapline plan: ${(e as Error).message}\n${USAGE}`);
-      return EXIT.input;
-    }
+    const parsed = parseCommand('plan', USAGE, args, io, {
+      out: { type: 'string' },
+      'in-place': { type: 'boolean' },
+      json: { type: 'boolean' },
+      ascii: { type: 'boolean' },
+    });
+    if ('exit' in parsed) return parsed.exit;
     const v = parsed.values;
-    if (v.help) {
-      io.out(USAGE);
-      return EXIT.ok;
-    }
-    if (parsed.positionals.length !== 1) {
-      io.err(`tapline plan: give exactly one design file (got ${parsed.positionals.length}).\n${USAGE}`);
-      return EXIT.input;
-    }
-    const input = resolve(io.cwd, parsed.positionals[0]);
+    const input = parsed.file;
     const output = v.out !== undefined ? resolve(io.cwd, v.out) : v['in-place'] ? input : plannedName(input);
     if (output === input && !v['in-place']) {
       io.err(`tapline plan: --out ${v.out} is the input file; add --in-place to overwrite it, or name another file.\n`);
       return EXIT.input;
     }
-    const read = await readDesignFile(input);
-    if (!read.ok) {
-      io.err(`${read.message}\n`);
-      return EXIT.input;
-    }
-    const result = plan(read.design);
+    const design = await readDesignArg(input, io);
+    if (!design) return EXIT.input;
+    const result = plan(design);
     let written: string | null = null;
     if (result.rows.length) {
       try {
@@ -87,7 +66,7 @@ export const planCommand: Command = {
       const { design: _design, ...rest } = result;
       io.out(`${JSON.stringify({ ...rest, output: written }, null, 2)}\n`);
     } else {
-      io.out(planReport(result, { ascii: v.ascii ?? false, output: written ? basename(written) : null }));
+      io.out(planReport(result, { ascii: v.ascii ?? false, output: written ? relative(io.cwd, written) : null }));
     }
     return result.ok ? EXIT.ok : EXIT.findings;
   },

@@ -1,10 +1,8 @@
-import { resolve } from 'node:path';
-import { parseArgs } from 'node:util';
 import { cautionsFor } from '../../engine/cautions';
 import { DEFAULT_TRIALS, type SpreadReport } from '../../engine/spread';
-import { readDesignFile } from '../../store/files';
 import { runSpreadParallel } from '../../workers/spread-pool';
 import { EXIT, type CliIo } from '../../io';
+import { parseCommand, readDesignArg } from '../args';
 import type { Command } from '../command';
 import { spreadJson, spreadText } from '../report/spread-report';
 
@@ -47,33 +45,15 @@ export const spreadCommand: Command = {
   summary: 'worst case and Monte Carlo spread of every trip point',
   usage: 'tapline spread FILE [--trials N] [--seed S] [--json]',
   async run(args: string[], io: CliIo): Promise<number> {
-    let parsed;
-    try {
-      parsed = parseArgs({
-        args,
-        allowPositionals: true,
-        options: {
-          trials: { type: 'string' },
-          seed: { type: 'string' },
-          threads: { type: 'string' },
-          json: { type: 'boolean' },
-          ascii: { type: 'boolean' },
-          help: { type: 'boolean', short: 'h' },
-        },
-      });
-    } catch (e) {
-      io.err(`tapline spread: ${(e as Error).message}\n${USAGE}`);
-      return EXIT.input;
-    }
+    const parsed = parseCommand('spread', USAGE, args, io, {
+      trials: { type: 'string' },
+      seed: { type: 'string' },
+      threads: { type: 'string' },
+      json: { type: 'boolean' },
+      ascii: { type: 'boolean' },
+    });
+    if ('exit' in parsed) return parsed.exit;
     const v = parsed.values;
-    if (v.help) {
-      io.out(USAGE);
-      return EXIT.ok;
-    }
-    if (parsed.positionals.length !== 1) {
-      io.err(`tapline spread: give exactly one design file (got ${parsed.positionals.length}).\n${USAGE}`);
-      return EXIT.input;
-    }
     const trials = wholeOption('trials', v.trials, DEFAULT_TRIALS, 1, 10_000_000);
     const seed = wholeOption('seed', v.seed, 1, 0, 4294967295);
     const threads = wholeOption('threads', v.threads, -1, 0, 1024);
@@ -83,23 +63,20 @@ export const spreadCommand: Command = {
         return EXIT.input;
       }
     }
-    const read = await readDesignFile(resolve(io.cwd, parsed.positionals[0]));
-    if (!read.ok) {
-      io.err(`${read.message}\n`);
-      return EXIT.input;
-    }
+    const design = await readDesignArg(parsed.file, io);
+    if (!design) return EXIT.input;
     const showProgress = io.isTty;
     const onProgress = showProgress ? (done: number, total: number) => io.err(`\r${progressBar(done / total, v.ascii ?? false)}`) : undefined;
-    const { report } = await runSpreadParallel(read.design, {
+    const { report } = await runSpreadParallel(design, {
       trials: trials as number,
       seed: seed as number,
       ...(threads === -1 ? {} : { threads: threads as number }),
       onProgress,
     });
     if (showProgress) io.err('\r\x1b[K');
-    const cautions = cautionsFor(read.design);
-    if (v.json) io.out(`${JSON.stringify(spreadJson(read.design, report, cautions), null, 2)}\n`);
-    else io.out(spreadText(read.design, report, cautions, { ascii: v.ascii ?? false }));
+    const cautions = cautionsFor(design);
+    if (v.json) io.out(`${JSON.stringify(spreadJson(design, report, cautions), null, 2)}\n`);
+    else io.out(spreadText(design, report, cautions, { ascii: v.ascii ?? false }));
     return spreadFails(report) ? EXIT.findings : EXIT.ok;
   },
 };
