@@ -1,17 +1,21 @@
 /**
- * Optional capabilities wired into the screen: the planner and the spread analysis (worker threads,
- * cancellable). Export stays absent until an export format exists; the key table then says why the
- * key is off.
+ * Optional capabilities wired into the screen: the planner, the spread analysis (worker threads,
+ * cancellable) and export (the same texts as `tapline export`, written atomically).
  */
+import { EXPORT_SEED, EXPORT_TRIALS, exportNeedsSpread, exportText } from '../engine/export/export-text';
 import { plan } from '../engine/planner';
+import { writeFileAtomic } from '../store/files';
 import type { QuantitySpread, SpreadReport } from '../engine/spread';
 import { runSpreadParallel } from '../workers/spread-pool';
 import type { PlanOutcome, Services } from './services';
 import type { Range, SpreadSummary } from './state/app-state';
 import type { Design } from '../engine/design/types';
 
-/** Monte Carlo trials the screen runs: enough for stable ±3 sigma points, quick enough to wait for. */
-export const SCREEN_TRIALS = 2000;
+/**
+ * Monte Carlo trials the screen runs: enough for stable ±3 sigma points, quick enough to wait for;
+ * the same run as the exports make (seed 1), so a report can reuse it.
+ */
+export const SCREEN_TRIALS = EXPORT_TRIALS;
 
 function toRange(q: QuantitySpread): Range | null {
   if (!q.stats) return null;
@@ -20,7 +24,7 @@ function toRange(q: QuantitySpread): Range | null {
 
 /** The screen's summary of a spread report. */
 export function summarizeSpread(r: SpreadReport): SpreadSummary {
-  return { trials: r.trials, channels: r.channels.map((c) => ({ id: c.id, rising: toRange(c.rising), falling: toRange(c.falling) })) };
+  return { trials: r.trials, report: r, channels: r.channels.map((c) => ({ id: c.id, rising: toRange(c.rising), falling: toRange(c.falling) })) };
 }
 
 /** Re-plans `design` from its targets; a plan that misses some target is still applied, with the reason. */
@@ -37,9 +41,14 @@ export function planDesign(design: Design): PlanOutcome {
 export function capabilities(): Pick<Services, 'plan' | 'spread' | 'exportDesign'> {
   return {
     plan: planDesign,
+    exportDesign: async (path, design, format, spread) => {
+      // Without a spread at hand the report's run goes to the worker threads, so the screen stays live.
+      const report = spread ?? (exportNeedsSpread(format) ? (await runSpreadParallel(design, { trials: EXPORT_TRIALS, seed: EXPORT_SEED })).report : null);
+      await writeFileAtomic(path, exportText({ design, format, spread: report }));
+    },
     spread: (design, onProgress) => {
       const abort = new AbortController();
-      const result = runSpreadParallel(design, { trials: SCREEN_TRIALS, signal: abort.signal, onProgress }).then(
+      const result = runSpreadParallel(design, { trials: SCREEN_TRIALS, seed: EXPORT_SEED, signal: abort.signal, onProgress }).then(
         (out) => summarizeSpread(out.report),
         (e: Error) => {
           if (e.name === 'AbortError') return null;

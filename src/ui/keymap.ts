@@ -13,12 +13,12 @@ import type { AppState } from './state/app-state';
 import { isModified, selectedField } from './state/app-reducer';
 
 /** Where a binding applies: the main screen, or the layer on top of it. */
-export type Scope = 'main' | 'prompt' | 'quit' | 'draft' | 'help' | 'settings';
+export type Scope = 'main' | 'prompt' | 'quit' | 'draft' | 'export' | 'help' | 'settings';
 
 /** Scope titles used by the help overlay. */
 export const SCOPE_TITLES: Record<Scope, string> = {
   main: 'Main screen', prompt: 'While typing a value or path', quit: 'Quit with unsaved changes',
-  draft: 'Unsaved draft found', help: 'This help', settings: 'Settings',
+  draft: 'Unsaved draft found', export: 'Export: choose the format', help: 'This help', settings: 'Settings',
 };
 
 /** Named keys Ink reports as flags. */
@@ -36,6 +36,7 @@ export type ActionName =
   | 'prompt-accept' | 'prompt-cancel' | 'prompt-erase' | 'prompt-clear' | 'prompt-older' | 'prompt-newer'
   | 'quit-save' | 'quit-discard' | 'quit-stay'
   | 'draft-restore' | 'draft-discard' | 'draft-later'
+  | 'export-spice' | 'export-bom' | 'export-report' | 'export-json' | 'export-cancel'
   | 'overlay-up' | 'overlay-down' | 'overlay-close' | 'setting-next' | 'setting-prev';
 
 /** What `whyDisabled` may look at. */
@@ -102,7 +103,7 @@ export const KEYMAP: readonly Binding[] = [
   { action: 'save', keys: [ch('s')], scope: 'main', description: 'save to the open file (asks for a name the first time)', hint: 'save' },
   { action: 'save-as', keys: [ch('S')], scope: 'main', description: 'save under a new name' },
   { action: 'open', keys: [ch('o')], scope: 'main', description: 'open a design file (Up/Down in the prompt walk the recent files)' },
-  { action: 'export', keys: [ch('x')], scope: 'main', description: 'export the circuit',
+  { action: 'export', keys: [ch('x')], scope: 'main', description: 'export: SPICE netlist, bill of materials, report or JSON, to a file beside the design', hint: 'export',
     whyDisabled: ({ hasExport }) => (hasExport ? null : 'export is not part of this build yet') },
   { action: 'settings', keys: [ch('c')], scope: 'main', description: 'settings: series, tolerance, part class, ASCII mode' },
   { action: 'help', keys: [ch('?')], scope: 'main', description: 'this list of keys', hint: 'keys' },
@@ -124,6 +125,12 @@ export const KEYMAP: readonly Binding[] = [
   { action: 'draft-restore', keys: [ch('y')], scope: 'draft', description: 'restore the unsaved edits', hint: 'restore' },
   { action: 'draft-discard', keys: [ch('n')], scope: 'draft', description: 'drop the draft, keep the file as saved', hint: 'drop draft' },
   { action: 'draft-later', keys: [named('escape')], scope: 'draft', description: 'decide later (the draft is kept until the next edit)', hint: 'later' },
+
+  { action: 'export-spice', keys: [ch('s')], scope: 'export', description: 'SPICE netlist that sweeps the input and measures each trip point (.cir)', hint: 'SPICE' },
+  { action: 'export-bom', keys: [ch('b')], scope: 'export', description: 'bill of materials as CSV (.bom.csv)', hint: 'parts CSV' },
+  { action: 'export-report', keys: [ch('r')], scope: 'export', description: 'Markdown report with the spread and the cautions (.report.md)', hint: 'report' },
+  { action: 'export-json', keys: [ch('j')], scope: 'export', description: 'the design plus every figure of the report, as JSON (.json)', hint: 'JSON' },
+  { action: 'export-cancel', keys: [named('escape'), ch('q')], scope: 'export', description: 'do not export', hint: 'cancel' },
 
   { action: 'overlay-up', keys: [named('up')], scope: 'help', description: 'scroll up' },
   { action: 'overlay-down', keys: [named('down')], scope: 'help', description: 'scroll down' },
@@ -179,7 +186,7 @@ export function keysLabel(b: Binding, ascii: boolean): string {
 
 /** The scope keys go to in `state`: the topmost layer wins. */
 export function activeScope(state: AppState): Scope {
-  if (state.question) return state.question.kind === 'quit' ? 'quit' : 'draft';
+  if (state.question) return state.question.kind;
   if (state.prompt) return 'prompt';
   if (state.overlay) return state.overlay;
   return 'main';

@@ -3,6 +3,8 @@
  * optional capabilities (planner, spread, export). Injected so tests run the whole app in memory.
  */
 import type { Design } from '../engine/design/types';
+import type { ExportFormat } from '../engine/export/export-text';
+import type { SpreadReport } from '../engine/spread';
 import type { DraftStore } from '../store/drafts';
 import type { ReadResult } from '../store/files';
 import type { SettingsStore } from '../store/settings';
@@ -34,6 +36,9 @@ export interface Services {
   plan?: (design: Design) => PlanOutcome;
   /** Starts the spread analysis; absent until spread is part of the build. */
   spread?: (design: Design, onProgress: (done: number, total: number) => void) => SpreadJob;
-  /** Exports the design to `path`; absent until an export format exists. */
-  exportDesign?: (path: string, design: Design) => Promise<void>;
+  /**
+   * Writes the design to `path` (absolute) in `format`, atomically. `spread` is the spread of this
+   * very design when it was run on screen; without it the report and JSON run their own.
+   */
+  exportDesign?: (path: string, design: Design, format: ExportFormat, spread: SpreadReport | undefined) => Promise<void>;
 }

@@ -32,6 +32,12 @@ describe('key table', () => {
     expect(findBinding('main', '', { ...noKey, tab: true, shift: true })?.action).toBe('pane-prev');
   });
 
+  it('sends keys to the export question while it is asked, r choosing the report', () => {
+    const state = appReducer(initialState(demoDesign(), null, 'demo'), { type: 'ask', question: { kind: 'export' } });
+    expect(activeScope(state)).toBe('export');
+    expect(findBinding('export', 'r', noKey)?.action).toBe('export-report');
+  });
+
   it('treats the Backspace byte (reported by Ink as delete) as erase in a prompt', () => {
     expect(findBinding('prompt', '', { ...noKey, delete: true })?.action).toBe('prompt-erase');
   });

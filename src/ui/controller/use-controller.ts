@@ -5,11 +5,13 @@
 import { basename, resolve } from 'node:path';
 import { type Dispatch, useRef } from 'react';
 import type { Design } from '../../engine/design/types';
+import { type ExportFormat, exportNeedsSpread } from '../../engine/export/export-text';
 import type { Settings } from '../../store/settings';
 import type { ActionName } from '../keymap';
 import type { Services, SpreadJob } from '../services';
 import { isModified } from '../state/app-reducer';
 import type { AppAction, AppState } from '../state/app-state';
+import { exportPathSuggestion } from '../state/export-path';
 import { settingRows } from '../settings/settings-rows';
 
 /** Inputs of useController. */
@@ -96,6 +98,10 @@ export function useController(o: ControllerOptions): Controller {
       void openFile(path);
       return;
     }
+    if (p.kind === 'export' && path === s.file) {
+      dispatch({ type: 'prompt-error', message: `export: ${path} is the design file itself: choose another name` });
+      return;
+    }
     if (p.kind === 'save-as' || p.kind === 'export') {
       if (path !== s.file && services.fileExists(path) && armed.current !== path) {
         armed.current = path;
@@ -104,13 +110,26 @@ export function useController(o: ControllerOptions): Controller {
       }
       armed.current = null;
       if (p.kind === 'save-as') void saveTo(path);
-      else if (services.exportDesign) {
-        services.exportDesign(path, s.design).then(
-          () => { dispatch({ type: 'prompt-cancel' }); say(`exported ${path}`, 'ok'); },
-          (e: Error) => dispatch({ type: 'prompt-error', message: `export: cannot write ${path}: ${e.message}` }),
-        );
-      }
+      else if (p.format) exportTo(path, p.format, text);
     }
+  };
+
+  /** Writes the export; the prompt closes at once and the message line follows the work. */
+  const exportTo = (path: string, format: ExportFormat, shown: string) => {
+    if (!services.exportDesign) return;
+    const spread = s.spread.state === 'done' && s.spread.design === s.design ? s.spread.result.report : undefined;
+    dispatch({ type: 'prompt-cancel' });
+    say(exportNeedsSpread(format) && !spread ? `exporting ${format}: running the spread first (m shows it on screen)...` : `exporting ${format}...`);
+    services.exportDesign(path, s.design, format, spread).then(
+      () => say(`exported ${format} to ${shown}`, 'ok'),
+      (e: NodeJS.ErrnoException) => say(`export: cannot write ${shown}: ${e.code ?? e.message}. Check the folder exists and is writable, then x again.`, 'error'),
+    );
+  };
+
+  const startExport = (format: ExportFormat) => {
+    dispatch({ type: 'ask', question: null });
+    const label = { spice: 'SPICE netlist', bom: 'parts CSV', report: 'report', json: 'JSON' }[format];
+    dispatch({ type: 'prompt-open', kind: 'export', format, label: `export ${label} to`, text: exportPathSuggestion(s.file, s.name, services.cwd, format) });
   };
 
   const suggestion = () => {
@@ -175,7 +194,12 @@ export function useController(o: ControllerOptions): Controller {
         return dispatch({ type: 'prompt-open', kind: 'save-as', label: 'save as', text: suggestion() });
       case 'save-as': return dispatch({ type: 'prompt-open', kind: 'save-as', label: 'save as', text: suggestion() });
       case 'open': return dispatch({ type: 'prompt-open', kind: 'open', label: 'open' });
-      case 'export': return dispatch({ type: 'prompt-open', kind: 'export', label: 'export to' });
+      case 'export': return dispatch({ type: 'ask', question: { kind: 'export' } });
+      case 'export-spice': return startExport('spice');
+      case 'export-bom': return startExport('bom');
+      case 'export-report': return startExport('report');
+      case 'export-json': return startExport('json');
+      case 'export-cancel': return dispatch({ type: 'ask', question: null });
       case 'plan': {
         if (!services.plan) return;
         const out = services.plan(s.design);

@@ -4,7 +4,7 @@ import { type ActionName, type Binding, type KeyContext, KEYMAP, keysLabel, SCOP
 /** One line of the help: a scope heading, or a binding with its keys, description and why it is off. */
 export type HelpLine = { kind: 'heading'; text: string } | { kind: 'binding'; keys: string; text: string; why: string | null };
 
-const ORDER: Scope[] = ['main', 'prompt', 'quit', 'draft', 'settings', 'help'];
+const ORDER: Scope[] = ['main', 'prompt', 'export', 'quit', 'draft', 'settings', 'help'];
 
 /** Every binding, grouped by scope; `ctx` marks those disabled right now and why. */
 export function helpLines(ctx: KeyContext, ascii: boolean): HelpLine[] {

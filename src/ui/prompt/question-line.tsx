@@ -22,6 +22,8 @@ function age(savedAt: number, now: number): string {
 export function QuestionLine({ question, now, width, theme }: QuestionLineProps) {
   const text = question.kind === 'quit'
     ? 'Unsaved changes. Save before quitting?'
-    : `Found unsaved edits from ${age(question.draft.savedAt, now)} ago (the last session did not save). Restore them?`;
+    : question.kind === 'export'
+      ? 'Export as which format? (keys below; the file name comes next)'
+      : `Found unsaved edits from ${age(question.draft.savedAt, now)} ago (the last session did not save). Restore them?`;
   return <Line width={width} segs={[{ text, style: theme.modified() }]} />;
 }

@@ -143,7 +143,7 @@ export function appReducer(s: AppState, a: AppAction): AppState {
       return { ...s, prompt: { kind: 'value', fieldId: f.id, label: `${f.label} =`, text: fieldText(f, s.design), error: null, recentIndex: -1 } };
     }
     case 'prompt-open':
-      return { ...s, prompt: { kind: a.kind, label: a.label, text: a.text ?? '', error: null, recentIndex: -1 } };
+      return { ...s, prompt: { kind: a.kind, label: a.label, text: a.text ?? '', error: null, recentIndex: -1, ...(a.format ? { format: a.format } : {}) } };
     case 'prompt-type':
       return s.prompt ? { ...s, prompt: { ...s.prompt, text: s.prompt.text + a.text, error: null } } : s;
     case 'prompt-erase':

@@ -1,5 +1,7 @@
 /** The whole state of the interactive screen and the actions that change it. */
 import type { Design } from '../../engine/design/types';
+import type { ExportFormat } from '../../engine/export/export-text';
+import type { SpreadReport } from '../../engine/spread';
 import type { Draft } from '../../store/drafts';
 import type { PaneId } from './fields';
 
@@ -20,10 +22,12 @@ export interface PromptState {
   error: string | null;
   /** Position in the recent-files list while browsing it (-1 = own text). */
   recentIndex: number;
+  /** Format of an `export` prompt. */
+  format?: ExportFormat;
 }
 
-/** A question that takes one key: quit with unsaved work, or restore a draft. */
-export type Question = { kind: 'quit' } | { kind: 'draft'; draft: Draft };
+/** A question that takes one key: quit with unsaved work, restore a draft, or which format to export. */
+export type Question = { kind: 'quit' } | { kind: 'draft'; draft: Draft } | { kind: 'export' };
 
 /** Full-screen layers over the main screen. */
 export type Overlay = 'help' | 'settings' | null;
@@ -38,6 +42,8 @@ export type SpreadStatus =
 /** Per channel spread of the trip points (unit of x). */
 export interface SpreadSummary {
   trials: number;
+  /** The whole report, reused by the report and JSON exports of the same design. */
+  report?: SpreadReport;
   channels: { id: string; rising: Range | null; falling: Range | null }[];
 }
 
@@ -89,7 +95,7 @@ export type AppAction =
   | { type: 'pane'; delta: number }
   | { type: 'step'; delta: number }
   | { type: 'edit-start' }
-  | { type: 'prompt-open'; kind: Exclude<PromptKind, 'value'>; label: string; text?: string }
+  | { type: 'prompt-open'; kind: Exclude<PromptKind, 'value'>; label: string; text?: string; format?: ExportFormat }
   | { type: 'prompt-type'; text: string }
   | { type: 'prompt-erase' }
   | { type: 'prompt-clear' }
