@@ -6,7 +6,7 @@
 import { availableParallelism } from 'node:os';
 import { buildSpreadModel, runTrials } from '../../src/engine/spread';
 import { runSpreadParallel } from '../../src/workers/spread-pool';
-import { eightStepDesign } from '../helpers/spread-designs';
+import { eightStepDesign } from '../helpers/designs';
 
 /** One benchmark figure (milliseconds). */
 export interface BenchFigure {

@@ -1,4 +1,5 @@
 import type { Channel, Design, PartClass } from '../../src/engine/design/types';
+import { BUILTIN_PARTS } from '../../src/engine/parts';
 
 /**
  * An idealised open-collector comparator class for closed-form checks: no offset, no bias current,
@@ -71,8 +72,9 @@ export function fourStepDesign(feedback = 1e6): Design {
 }
 
 /**
- * The benchmark design: eight bar steps on two quads from a 24 V-class measured supply, input
- * divider, shunt reference, feedback into each tap and an LED per step.
+ * The benchmark design (engine and spread): eight bar steps on two bipolar open-collector quads,
+ * powered by the 24 V-class battery it measures, input divider, shunt reference, feedback into each
+ * tap and an LED per step.
  */
 export function eightStepDesign(): Design {
   const led = { ohms: 8.2e3, knee: 1.9, rdyn: 20, anode: 'supply' };
@@ -81,7 +83,7 @@ export function eightStepDesign(): Design {
     supply: { kind: 'measured' },
     input: { signal: 'voltage', offset: 0, gain: 1, divider: { top: 100e3, bottom: 10e3 } },
     reference: { kind: 'shunt', volts: 2.5, bias: 10e3, rdyn: 0.2, minCurrent: 1e-3, maxCurrent: 0.1, tolerance: 0.005 },
-    part: idealPart({ vsat0: 0.1, rsat: 60, ibTyp: 25e-9, cmHeadroom: 1.5, cmMin: 0, iqPerPackage: 0.8e-3 }),
+    part: { ...BUILTIN_PARTS['bipolar-oc-quad'] },
     string: [4.7e3, 1e3, 1e3, 1e3, 1e3, 1e3, 1e3, 1e3, 27e3],
     channels: Array.from({ length: 8 }, (_, k) =>
       stepChannel(`S${k + 1}`, (k % 4) + 1, `T${8 - k}`, { package: Math.floor(k / 4) + 1, feedback: { ohms: 4.7e6, to: 'plus' }, led: { ...led } }),

@@ -1,19 +1,8 @@
 import { describe, expect, test } from 'vitest';
+import { rng } from '../../helpers/random';
 import type { SeriesName } from '../../../src/engine/design/types';
 import { nearestInSeries } from '../../../src/engine/series';
 import { bestPair, candidatesFor, roundEach, snapScales, snapString, stringCost, tapFractions } from '../../../src/engine/planner/snap';
-
-/** Small seeded generator (mulberry32, from memory) so the random strings are reproducible. */
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** A random string of `n` resistors, 100 Ω to 100 kΩ, log-uniform. */
 function randomString(next: () => number, n: number): number[] {
