@@ -102,7 +102,7 @@ export const KEYMAP: readonly Binding[] = [
     whyDisabled: ({ state }) => (state.spread.state === 'running' ? null : 'no spread analysis is running') },
   { action: 'save', keys: [ch('s')], scope: 'main', description: 'save to the open file (asks for a name the first time)', hint: 'save' },
   { action: 'save-as', keys: [ch('S')], scope: 'main', description: 'save under a new name' },
-  { action: 'open', keys: [ch('o')], scope: 'main', description: 'open a design file (Up/Down in the prompt walk the recent files)' },
+  { action: 'open', keys: [ch('o')], scope: 'main', description: 'open a design file or a built-in preset (Up/Down in the prompt list recent files, then presets)', hint: 'open' },
   { action: 'export', keys: [ch('x')], scope: 'main', description: 'export: SPICE netlist, bill of materials, report or JSON, to a file beside the design', hint: 'export',
     whyDisabled: ({ hasExport }) => (hasExport ? null : 'export is not part of this build yet') },
   { action: 'settings', keys: [ch('c')], scope: 'main', description: 'settings: series, tolerance, part class, ASCII mode' },
@@ -114,7 +114,7 @@ export const KEYMAP: readonly Binding[] = [
   { action: 'prompt-cancel', keys: [named('escape')], scope: 'prompt', description: 'cancel, nothing changes', hint: 'cancel' },
   { action: 'prompt-erase', keys: [named('backspace')], scope: 'prompt', description: 'erase the last character' },
   { action: 'prompt-clear', keys: [{ ctrl: 'u' }], scope: 'prompt', description: 'erase everything typed' },
-  { action: 'prompt-older', keys: [named('up')], scope: 'prompt', description: 'older recent file (open and save-as prompts)', hint: 'recent', pairedWith: 'prompt-newer' },
+  { action: 'prompt-older', keys: [named('up')], scope: 'prompt', description: 'older recent file, then the presets (open and save-as prompts)', hint: 'recent', pairedWith: 'prompt-newer' },
   { action: 'prompt-newer', keys: [named('down')], scope: 'prompt', description: 'newer recent file' },
 
   { action: 'quit-save', keys: [ch('s')], scope: 'quit', description: 'save, then quit', hint: 'save and quit' },

@@ -13,6 +13,7 @@ import type { Design } from '../engine/design/types';
 import { openDrafts } from '../store/drafts';
 import { readDesignFile, writeFileAtomic } from '../store/files';
 import { fileExists } from '../store/paths';
+import { listPresets } from '../store/presets';
 import { openSettings } from '../store/settings';
 import { App } from './app';
 import { capabilities } from './capabilities';
@@ -69,6 +70,7 @@ export async function openTui(file: string | undefined, io: CliIo): Promise<numb
     readDesign: readDesignFile,
     writeDesign: (path, design) => writeFileAtomic(path, `${JSON.stringify(designToFile(design), null, 2)}\n`),
     fileExists,
+    presets: async () => (await listPresets()).presets,
     ...capabilities(),
   };
 

@@ -6,6 +6,7 @@ import type { Design } from '../engine/design/types';
 import type { ExportFormat } from '../engine/export/export-text';
 import type { SpreadReport } from '../engine/spread';
 import type { DraftStore } from '../store/drafts';
+import type { PresetInfo } from '../store/presets';
 import type { ReadResult } from '../store/files';
 import type { SettingsStore } from '../store/settings';
 import type { SpreadSummary } from './state/app-state';
@@ -32,6 +33,8 @@ export interface Services {
   /** Writes the design file atomically (temporary file, then rename). */
   writeDesign(path: string, design: Design): Promise<void>;
   fileExists(path: string): boolean;
+  /** The built-in example designs the open prompt offers; absent when the build has none. */
+  presets?: () => Promise<PresetInfo[]>;
   /** Re-plans from targets; absent until the planner is part of the build. */
   plan?: (design: Design) => PlanOutcome;
   /** Starts the spread analysis; absent until spread is part of the build. */

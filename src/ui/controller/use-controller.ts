@@ -3,9 +3,10 @@
  * spread, quitting) through the injected services. Keys never reach the reducer directly.
  */
 import { basename, resolve } from 'node:path';
-import { type Dispatch, useRef } from 'react';
+import { type Dispatch, useEffect, useRef } from 'react';
 import type { Design } from '../../engine/design/types';
 import { type ExportFormat, exportNeedsSpread } from '../../engine/export/export-text';
+import type { PresetInfo } from '../../store/presets';
 import type { Settings } from '../../store/settings';
 import type { ActionName } from '../keymap';
 import type { Services, SpreadJob } from '../services';
@@ -47,6 +48,10 @@ export function useController(o: ControllerOptions): Controller {
   const armed = useRef<string | null>(null);
   const quitAfterSave = useRef(false);
   const spreadJob = useRef<SpreadJob | null>(null);
+  const presets = useRef<PresetInfo[]>([]);
+  useEffect(() => {
+    services.presets?.().then((list) => (presets.current = list), () => undefined);
+  }, [services]);
   const say = (text: string, tone: 'info' | 'ok' | 'error' = 'info') => dispatch({ type: 'message', message: { text, tone } });
   const span = s.design.quantity.max - s.design.quantity.min;
 
@@ -67,6 +72,16 @@ export function useController(o: ControllerOptions): Controller {
     if (quitAfterSave.current) o.exit(0);
   };
 
+  const openPreset = async (preset: PresetInfo) => {
+    const read = await services.readDesign(preset.path);
+    if (!read.ok) {
+      dispatch({ type: 'prompt-error', message: read.message.split('\n').slice(0, 2).join(' ') });
+      return;
+    }
+    // A preset opens as a new design: s asks for a name, so the built-in file is never overwritten.
+    dispatch({ type: 'loaded', design: read.design, file: null, name: `${preset.id}.tapline.json (preset)`, message: { text: `opened preset ${preset.id}: ${read.design.name}. s saves a copy under a name you choose`, tone: 'ok' } });
+  };
+
   const openFile = async (path: string) => {
     const read = await services.readDesign(path);
     if (!read.ok) {
@@ -84,18 +99,22 @@ export function useController(o: ControllerOptions): Controller {
     if (!p) return;
     const text = p.text.trim();
     if (text === '') {
-      dispatch({ type: 'prompt-error', message: `${p.kind === 'open' ? 'open' : 'save as'}: no file name: type a path such as gauge.tapline.json` });
+      const ids = presets.current.map((x) => x.id);
+      dispatch({ type: 'prompt-error', message: p.kind === 'open'
+        ? `open: type a file path${ids.length ? ` or a preset name (↑/↓ lists them: ${ids.join(', ')})` : ' such as gauge.tapline.json'}`
+        : 'save as: no file name: type a path such as gauge.tapline.json' });
       return;
     }
     const path = resolve(services.cwd, text);
     if (p.kind === 'open') {
+      const preset = services.fileExists(path) ? undefined : presets.current.find((x) => x.id === text || `${x.id}.tapline.json` === text);
       if (isModified(s) && armed.current !== path) {
         armed.current = path;
         dispatch({ type: 'prompt-error', message: 'open: this design has unsaved changes (kept as a draft): press Enter again to open anyway, Esc to go back and save' });
         return;
       }
       armed.current = null;
-      void openFile(path);
+      void (preset ? openPreset(preset) : openFile(path));
       return;
     }
     if (p.kind === 'export' && path === s.file) {
@@ -134,7 +153,7 @@ export function useController(o: ControllerOptions): Controller {
 
   const suggestion = () => {
     if (s.file) return basename(s.file);
-    const bare = s.name.replace(/ \(demo\)$/, '');
+    const bare = s.name.replace(/ \((demo|preset)\)$/, '');
     return bare.endsWith('.json') ? bare : `${bare}.tapline.json`;
   };
 
@@ -193,7 +212,7 @@ export function useController(o: ControllerOptions): Controller {
         if (s.file) return void saveTo(s.file);
         return dispatch({ type: 'prompt-open', kind: 'save-as', label: 'save as', text: suggestion() });
       case 'save-as': return dispatch({ type: 'prompt-open', kind: 'save-as', label: 'save as', text: suggestion() });
-      case 'open': return dispatch({ type: 'prompt-open', kind: 'open', label: 'open' });
+      case 'open': return dispatch({ type: 'prompt-open', kind: 'open', label: presets.current.length ? 'open file or preset' : 'open' });
       case 'export': return dispatch({ type: 'ask', question: { kind: 'export' } });
       case 'export-spice': return startExport('spice');
       case 'export-bom': return startExport('bom');
@@ -232,7 +251,8 @@ export function useController(o: ControllerOptions): Controller {
       case 'prompt-older':
       case 'prompt-newer':
         if (s.prompt?.kind !== 'open' && s.prompt?.kind !== 'save-as') return undefined;
-        return dispatch({ type: 'prompt-recent', delta: action === 'prompt-older' ? 1 : -1, recent: o.settings.recent });
+        return dispatch({ type: 'prompt-recent', delta: action === 'prompt-older' ? 1 : -1,
+          recent: s.prompt.kind === 'open' ? [...o.settings.recent, ...presets.current.map((x) => x.id)] : o.settings.recent });
       case 'quit-save':
         dispatch({ type: 'ask', question: null });
         quitAfterSave.current = true;
