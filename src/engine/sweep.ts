@@ -1,4 +1,4 @@
-import type { Solution, Solver, State } from './network/solve';
+import { type Solution, type Solver, type State, stateFromKey, stateKey } from './network/solve';
 import { GND } from './network/types';
 
 /** Sweep direction: x rising or falling. */
@@ -93,7 +93,8 @@ function walk(solver: Solver, start: State, from: number, to: number, dir: Direc
       if ((xz - x) * sign <= 0) continue;
       if ((xz - next) * sign < 0) next = xz;
     }
-    if ((next - x) * sign > 0) pushSegment(out, dir, x, next, state);
+    // The solution keeps its own copy of the state, so segments can share it.
+    if ((next - x) * sign > 0) pushSegment(out, dir, x, next, sol.state);
     if (next === to) return state;
     x = next;
     state = settle(solver, state, x, dir, out, to);
@@ -115,7 +116,7 @@ function pushSegment(out: SweepResult, dir: Direction, a: number, b: number, sta
     last.to = Math.max(last.to, to);
     return;
   }
-  out.segments.push({ direction: dir, from, to, state: state.slice() });
+  out.segments.push({ direction: dir, from, to, state });
 }
 
 function voltageAt(sol: Solution, node: number, x: number): number {
@@ -128,21 +129,22 @@ function sameState(a: State, b: State): boolean {
 }
 
 /**
- * Flips the most violated element until the state is consistent just past x. A repeated state is a
+ * Flips the most violated element until the state is consistent just past x (changing `start` in
+ * place; the sweep owns it). A repeated state is a
  * cycle: the band with no stable state is recorded and the sweep resumes where a cycle state becomes
  * consistent again.
  */
 function settle(solver: Solver, start: State, x: number, dir: Direction, out: SweepResult, to: number): State {
   const sign = dir === 'up' ? 1 : -1;
   const nc = solver.net.comparators.length;
-  const seen: State[] = [];
-  let state = start.slice();
+  const seen: (number | string)[] = [];
+  const state = start;
   const limit = 4 * state.length + 8;
   for (let step = 0; step <= limit; step++) {
-    for (let r = 0; r < seen.length; r++) {
-      if (sameState(seen[r], state)) return escapeBand(solver, seen.slice(r), x, dir, out, to);
-    }
-    seen.push(state.slice());
+    const key = stateKey(state);
+    const repeat = seen.indexOf(key);
+    if (repeat >= 0) return escapeBand(solver, seen.slice(repeat).map((k) => stateFromKey(k, state.length)), x, dir, out, to);
+    seen.push(key);
     const sol = solver.solve(state);
     const { da, db } = sol;
     let worst = -1;

@@ -234,7 +234,7 @@ export class Solver {
 
   /** Solves the network in `state`, from the cache when it has been solved before. */
   solve(state: State): Solution {
-    const key = state.length <= 52 ? stateBits(state) : stateKey(state);
+    const key = stateKey(state);
     const hit = this.cache.get(key);
     if (hit) return hit;
     const sol = this.factorAndSolve(state);
@@ -350,8 +350,16 @@ function at(vec: Float64Array, node: number): number {
   return node === GND ? 0 : vec[node];
 }
 
-/** Numeric key of a state of at most 52 elements (exact in a double). */
-function stateBits(state: State): number {
+/**
+ * Key of a state for caches and cycle detection: a number (bit k = element k) up to 52 elements,
+ * exact in a double, and a text of 0s and 1s beyond.
+ */
+export function stateKey(state: State): number | string {
+  if (state.length > 52) {
+    let text = '';
+    for (let k = 0; k < state.length; k++) text += state[k] ? '1' : '0';
+    return text;
+  }
   let key = 0;
   let bit = 1;
   for (let k = 0; k < state.length; k++) {
@@ -361,9 +369,17 @@ function stateBits(state: State): number {
   return key;
 }
 
-/** Text key of a state, for caches and cycle detection. */
-export function stateKey(state: State): string {
-  let key = '';
-  for (let k = 0; k < state.length; k++) key += state[k] ? '1' : '0';
-  return key;
+/** The state of `length` elements that `stateKey` turned into `key`. */
+export function stateFromKey(key: number | string, length: number): State {
+  const state = new Uint8Array(length);
+  if (typeof key === 'string') {
+    for (let k = 0; k < length; k++) state[k] = key[k] === '1' ? 1 : 0;
+    return state;
+  }
+  let rest = key;
+  for (let k = 0; k < length; k++) {
+    state[k] = rest % 2;
+    rest = Math.floor(rest / 2);
+  }
+  return state;
 }
