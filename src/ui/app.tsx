@@ -6,7 +6,7 @@ import { Line } from './common/line';
 import { type Controller, useController } from './controller/use-controller';
 import { useKeys } from './controller/use-keys';
 import { FindingsPane } from './findings/findings-pane';
-import { HelpOverlay, helpLength } from './help/help-overlay';
+import { HelpOverlay, helpScrollCount } from './help/help-overlay';
 import { useAnalysis, useProbe } from './hooks/use-analysis';
 import { useAutosave } from './hooks/use-autosave';
 import { type ScreenSize, useScreenSize } from './hooks/use-screen-size';
@@ -57,8 +57,10 @@ export function App({ initial, services, noColor, onExit, size: fixedSize, onFlu
   onFlushReady?.(autosave.flush);
   const ctx: KeyContext = { state, hasPlanner: !!services.plan, hasSpread: !!services.spread, hasExport: !!services.exportDesign };
   const plotWidth = layout ? sweepPlotWidth(state.design, layout.rightWidth) : 40;
+  const footerRows = state.prompt?.error ? 2 : 1;
+  const overlayHeight = layout ? layout.rows - 2 - footerRows : 1;
   const controller: Controller = useController({
-    state, dispatch, services, settings, setSettings, plotWidth, helpLength: helpLength(ctx, theme.isAscii),
+    state, dispatch, services, settings, setSettings, plotWidth, helpLength: layout ? helpScrollCount(ctx, theme.isAscii, layout.columns, overlayHeight) : 1,
     flushDraft: autosave.flush,
     exit: (code) => {
       onExit(code);
@@ -88,12 +90,11 @@ export function App({ initial, services, noColor, onExit, size: fixedSize, onFlu
   const footer = state.question ? <QuestionLine question={state.question} now={services.now()} width={W} theme={theme} />
     : state.prompt ? <PromptLine prompt={state.prompt} width={W} theme={theme} />
     : <Line width={W} segs={[{ text: state.message?.text ?? '', style: state.message?.tone === 'error' ? theme.error() : state.message?.tone === 'ok' ? theme.ok() : theme.muted() }]} />;
-  const footerRows = state.prompt?.error ? 2 : 1;
   let body;
   if (state.overlay === 'help') {
-    body = <HelpOverlay ctx={ctx} top={state.overlayIndex} width={W} height={layout.rows - 2 - footerRows} theme={theme} />;
+    body = <HelpOverlay ctx={ctx} top={state.overlayIndex} width={W} height={overlayHeight} theme={theme} />;
   } else if (state.overlay === 'settings') {
-    body = <SettingsOverlay settings={settings} selected={state.overlayIndex} path={services.settings.path} width={W} height={layout.rows - 2 - footerRows} theme={theme} />;
+    body = <SettingsOverlay settings={settings} selected={state.overlayIndex} path={services.settings.path} width={W} height={overlayHeight} theme={theme} />;
   } else if (!computed.ok) {
     body = <Box height={layout.rows - 2 - footerRows}><Text {...theme.error()}>{computed.message}</Text></Box>;
   } else {

@@ -24,7 +24,7 @@ export interface ControllerOptions {
   setSettings: (s: Settings) => void;
   /** Columns of the sweep chart: the probe moves one column per arrow key. */
   plotWidth: number;
-  /** Lines in the help overlay, for its scrolling. */
+  /** Scroll positions of the help overlay (its rows less those on screen, plus one). */
   helpLength: number;
   /** Writes any pending draft now. */
   flushDraft: () => void;

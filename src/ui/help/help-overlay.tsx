@@ -16,19 +16,55 @@ export interface HelpOverlayProps {
   theme: Theme;
 }
 
-/** Number of lines the help has, for scrolling. */
-export function helpLength(ctx: KeyContext, ascii: boolean): number {
-  return helpLines(ctx, ascii).reduce((n, l) => n + (l.kind === 'binding' && l.why ? 2 : 1), 0);
+/** Cells of the keys column. */
+const KEY_W = 14;
+
+/** One screen row of the help. */
+type HelpRow = { kind: 'heading'; text: string } | { kind: 'binding'; keys: string; text: string; isOff: boolean };
+
+/** Splits `text` at spaces into pieces of at most `width` cells (a longer word is cut). */
+export function wrapWords(text: string, width: number): string[] {
+  const out: string[] = [];
+  let line = '';
+  for (const word of text.split(' ')) {
+    const next = line ? `${line} ${word}` : word;
+    if ([...next].length <= width) line = next;
+    else {
+      if (line) out.push(line);
+      line = [...word].length > width ? [...word].slice(0, width).join('') : word;
+    }
+  }
+  out.push(line);
+  return out;
+}
+
+/** The help as screen rows `width` cells wide: long descriptions continue on the next row, never cut. */
+export function helpRows(ctx: KeyContext, ascii: boolean, width: number): HelpRow[] {
+  const textW = Math.max(10, width - KEY_W - 1);
+  const rows: HelpRow[] = [];
+  for (const l of helpLines(ctx, ascii)) {
+    if (l.kind === 'heading') {
+      rows.push(l);
+      continue;
+    }
+    const isOff = !!l.why;
+    wrapWords(l.text, textW).forEach((t, k) => rows.push({ kind: 'binding', keys: k === 0 ? l.keys : '', text: t, isOff }));
+    if (l.why) wrapWords(`off now: ${l.why}`, textW).forEach((t) => rows.push({ kind: 'binding', keys: '', text: t, isOff }));
+  }
+  return rows;
+}
+
+/** Scroll positions the help has in a `width` x `height` overlay: the last one shows its last row. */
+export function helpScrollCount(ctx: KeyContext, ascii: boolean, width: number, height: number): number {
+  return Math.max(1, helpRows(ctx, ascii, width).length - Math.max(1, height - 1) + 1);
 }
 
 /** The help overlay: every key, grouped by where it applies, with why a key is off right now. */
 export function HelpOverlay({ ctx, top, width, height, theme }: HelpOverlayProps) {
-  const lines = helpLines(ctx, theme.isAscii).flatMap((l) => (l.kind === 'binding' && l.why
-    ? [{ ...l, why: null, isOff: true }, { kind: 'binding' as const, keys: '', text: `off now: ${l.why}`, why: null, isOff: true }]
-    : [{ ...l, isOff: false }]));
+  const lines = helpRows(ctx, theme.isAscii, width);
   const visible = Math.max(1, height - 1);
   const start = Math.min(top, Math.max(0, lines.length - visible));
-  const keyW = 14;
+  const keyW = KEY_W;
   return (
     <Box flexDirection="column" width={width} height={height}>
       <PaneTitle title="Keys" note={`${start + 1}-${Math.min(lines.length, start + visible)}/${lines.length}`} isFocused width={width} theme={theme} />

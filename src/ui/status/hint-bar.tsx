@@ -16,7 +16,7 @@ export interface HintBarProps {
  */
 export function hints(scope: Scope, ctx: KeyContext, ascii: boolean): { keys: string; word: string; isEnabled: boolean }[] {
   const first = (b: Binding) => (b.action === 'help' || b.action === 'quit' ? 0 : 1);
-  const rows = KEYMAP.filter((b: Binding) => b.scope === scope && b.hint && (scope !== 'main' || !whyDisabled(b, ctx)));
+  const rows = KEYMAP.filter((b: Binding) => b.scope === scope && b.hint && !whyDisabled(b, ctx));
   return [...rows].sort((a, b) => first(a) - first(b)).map((b) => {
     const pair = b.pairedWith ? KEYMAP.find((o) => o.scope === scope && o.action === b.pairedWith) : undefined;
     const keys = pair ? `${keyName(b.keys[0], ascii)}${keyName(pair.keys[0], ascii)}` : keyName(b.keys[0], ascii);
