@@ -7,6 +7,12 @@ import { formatEng } from './values';
 export const DEFAULT_RESISTOR_RATING = 0.125;
 
 /**
+ * Largest resistance that behaves as its value on an ordinary board (ohms): above it surface leakage
+ * and the comparator's bias current through it move trip points. Common practice, no source.
+ */
+export const HIGH_RESISTANCE = 10e6;
+
+/**
  * The checks of ENGINE.md §5. Each finding names the part, where in x, how much, and what to change.
  */
 export function runChecks(p: Prepared, a: Analysis, st: SegmentStats): Finding[] {
@@ -70,6 +76,13 @@ export function runChecks(p: Prepared, a: Analysis, st: SegmentStats): Finding[]
   checkReference(p, st, a, add, fx);
   checkHysteresis(p, a, add, fx);
   checkSlots(p, add);
+  for (const r of net.resistors) {
+    if (r.ohms > HIGH_RESISTANCE) {
+      add('info', 'high-resistance', r.id, null, formatEng(r.ohms, 'Ω'),
+        `${r.id} is ${formatEng(r.ohms, 'Ω')}: above about ${formatEng(HIGH_RESISTANCE, 'Ω')} board leakage, humidity and bias current make the value unreliable.`,
+        r.id.startsWith('RF:') ? 'Lower the series input resistor (or the string impedance) so a smaller feedback resistor gives the same hysteresis.' : 'Scale the surrounding resistors down.');
+    }
+  }
   for (const [id, w] of Object.entries(st.dissipation)) {
     if (w > DEFAULT_RESISTOR_RATING) {
       add('warning', 'dissipation', id, null, formatEng(w, 'W'),

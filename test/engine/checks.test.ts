@@ -68,4 +68,11 @@ describe('checks', () => {
     const f = analyze(d).findings.find((x) => x.code === 'supply-dependent');
     expect(f?.amount).toBe('±500 mV');
   });
+
+  test('a feedback resistor above 10 MΩ is noted, with a fix that keeps the hysteresis (common practice, no source)', () => {
+    const f = analyze(fourStepDesign(22e6)).findings.filter((x) => x.code === 'high-resistance');
+    expect(f).toHaveLength(4);
+    expect(f[0].severity).toBe('info');
+    expect(f[0].fix).toMatch(/smaller feedback resistor/);
+  });
 });

@@ -29,6 +29,12 @@ export function plannedName(path: string): string {
   return `${stem}.planned.tapline.json`;
 }
 
+/** `path` relative to `cwd` when it lies below it, else as it is. */
+function shortPath(cwd: string, path: string): string {
+  const rel = relative(cwd, path);
+  return rel.startsWith('..') ? path : rel;
+}
+
 /** `tapline plan FILE`: plans the targets and writes the realised design. */
 export const planCommand: Command = {
   name: 'plan',
@@ -66,7 +72,7 @@ export const planCommand: Command = {
       const { design: _design, ...rest } = result;
       io.out(`${JSON.stringify({ ...rest, output: written }, null, 2)}\n`);
     } else {
-      io.out(planReport(result, { ascii: v.ascii ?? false, output: written ? relative(io.cwd, written) : null }));
+      io.out(planReport(result, { ascii: v.ascii ?? false, output: written ? shortPath(io.cwd, written) : null }));
     }
     return result.ok ? EXIT.ok : EXIT.findings;
   },
