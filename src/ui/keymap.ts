@@ -114,7 +114,7 @@ export const KEYMAP: readonly Binding[] = [
   { action: 'prompt-cancel', keys: [named('escape')], scope: 'prompt', description: 'cancel, nothing changes', hint: 'cancel' },
   { action: 'prompt-erase', keys: [named('backspace')], scope: 'prompt', description: 'erase the last character' },
   { action: 'prompt-clear', keys: [{ ctrl: 'u' }], scope: 'prompt', description: 'erase everything typed' },
-  { action: 'prompt-older', keys: [named('up')], scope: 'prompt', description: 'older recent file, then the presets (open and save-as prompts)', hint: 'recent', pairedWith: 'prompt-newer',
+  { action: 'prompt-older', keys: [named('up')], scope: 'prompt', description: 'older recent file, then the presets (open and save-as prompts)', hint: 'list', pairedWith: 'prompt-newer',
     whyDisabled: ({ state }) => (state.prompt?.kind === 'open' || state.prompt?.kind === 'save-as' ? null : 'only the open and save-as prompts keep a list') },
   { action: 'prompt-newer', keys: [named('down')], scope: 'prompt', description: 'newer recent file' },
 

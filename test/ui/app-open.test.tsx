@@ -40,8 +40,7 @@ describe('App open', () => {
     const app = renderApp({ services: withPreset() });
     await settle();
     await app.press('o', KEYS.enter);
-    expect(app.frame()).toContain('or a preset name');
-    expect(app.frame()).toContain('fan-control');
+    expect(app.frame()).toContain('or ↑/↓ to pick one of 1 preset');
     app.unmount();
   });
 

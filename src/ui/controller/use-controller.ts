@@ -99,9 +99,9 @@ export function useController(o: ControllerOptions): Controller {
     if (!p) return;
     const text = p.text.trim();
     if (text === '') {
-      const ids = presets.current.map((x) => x.id);
+      const n = presets.current.length;
       dispatch({ type: 'prompt-error', message: p.kind === 'open'
-        ? `open: type a file path${ids.length ? ` or a preset name (↑/↓ lists them: ${ids.join(', ')})` : ' such as gauge.tapline.json'}`
+        ? `open: type a file path${n ? `, or ↑/↓ to pick one of ${n} preset${n === 1 ? "" : "s"}` : ' such as gauge.tapline.json'}`
         : 'save as: no file name: type a path such as gauge.tapline.json' });
       return;
     }
