@@ -101,7 +101,7 @@ export function useController(o: ControllerOptions): Controller {
     if (text === '') {
       const n = presets.current.length;
       dispatch({ type: 'prompt-error', message: p.kind === 'open'
-        ? `open: type a file path${n ? `, or ↑/↓ to pick one of ${n} preset${n === 1 ? "" : "s"}` : ' such as gauge.tapline.json'}`
+        ? `open: type a file path${n ? `, or ↑/↓ to pick one of ${n} preset${n === 1 ? '' : 's'}` : ' such as gauge.tapline.json'}`
         : 'save as: no file name: type a path such as gauge.tapline.json' });
       return;
     }
