@@ -11,7 +11,15 @@ const io: CliIo = {
 };
 
 // The interactive screen is loaded only when asked for, so `check` and friends start fast.
-const openTui = async (file: string | undefined, cliIo: CliIo) => (await import('../ui/run')).openTui(file, cliIo);
+const openTui = async (file: string | undefined, cliIo: CliIo) => {
+  // Ink switches to a log-only mode (nothing drawn until exit) when CI variables are set, which it
+  // reads once on import. A person at a real terminal gets the live screen regardless.
+  if (cliIo.isTty) {
+    delete process.env.CI;
+    delete process.env.CONTINUOUS_INTEGRATION;
+  }
+  return (await import('../ui/run')).openTui(file, cliIo);
+};
 
 main(process.argv.slice(2), io, openTui).then(
   (code) => {
