@@ -355,14 +355,21 @@ function at(vec: Float64Array, node: number): number {
  * exact in a double, and a text of 0s and 1s beyond.
  */
 export function stateKey(state: State): number | string {
-  if (state.length > 52) {
+  const n = state.length;
+  if (n <= 30) {
+    // Small-integer bit operations: the common case, and the hot path of every sweep.
+    let key = 0;
+    for (let k = 0; k < n; k++) if (state[k]) key |= 1 << k;
+    return key;
+  }
+  if (n > 52) {
     let text = '';
-    for (let k = 0; k < state.length; k++) text += state[k] ? '1' : '0';
+    for (let k = 0; k < n; k++) text += state[k] ? '1' : '0';
     return text;
   }
   let key = 0;
   let bit = 1;
-  for (let k = 0; k < state.length; k++) {
+  for (let k = 0; k < n; k++) {
     if (state[k]) key += bit;
     bit *= 2;
   }
