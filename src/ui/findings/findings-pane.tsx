@@ -3,17 +3,17 @@ import type { Finding } from '../../engine/analysis-types';
 import type { Design } from '../../engine/design/types';
 import { Line, type Seg } from '../common/line';
 import { PaneTitle } from '../common/pane-title';
-import { scrollStart } from '../layout';
 import type { SpreadStatus } from '../state/app-state';
 import type { Theme } from '../theme';
-import { findingLines, type FindingLine } from './findings-lines';
+import { type FindingLine, findingLines } from './findings-lines';
+import { type FindingRow, findingsView, TAG_W } from './findings-rows';
 
 /** Props of FindingsPane. */
 export interface FindingsPaneProps {
   design: Design;
   findings: Finding[];
   spread: SpreadStatus;
-  /** Selected entry (its fix is shown under it). */
+  /** Selected stop (an entry, or a further pane-full of a tall entry) when focused. */
   selected: number;
   isFocused: boolean;
   width: number;
@@ -23,30 +23,28 @@ export interface FindingsPaneProps {
 
 const TAGS: Record<FindingLine['tag'], string> = { error: 'ERR ', warning: 'WARN', info: 'info', caution: 'CARE', spread: 'sprd' };
 
-/** The findings pane: checks, cautions and spread, one line each; the selected one also shows what to do. */
+function tagStyle(tag: FindingLine['tag'], theme: Theme) {
+  return tag === 'error' || tag === 'warning' || tag === 'info' ? theme.severity(tag) : tag === 'caution' ? theme.severity('warning') : theme.muted();
+}
+
+function rowSegs(r: FindingRow, isSelected: boolean, theme: Theme): Seg[] {
+  if (r.part === 'note') return [{ text: r.text, style: r.key === 'none' ? theme.ok() : theme.muted() }];
+  const head: Seg = r.tag ? { text: `${TAGS[r.tag]} `, style: tagStyle(r.tag, theme) } : { text: ' '.repeat(TAG_W) };
+  const style = r.part === 'detail' ? theme.muted() : isSelected ? theme.selected(true) : undefined;
+  return [head, { text: r.text, style }];
+}
+
+/** The findings pane: checks, cautions and spread, wrapped so no caution is ever cut; focused, it reads them one by one with their fixes. */
 export function FindingsPane({ design, findings, spread, selected, isFocused, width, height, theme }: FindingsPaneProps) {
   const lines = findingLines(findings, design, spread, theme.isAscii);
   const errors = findings.filter((f) => f.severity === 'error').length;
   const warnings = findings.filter((f) => f.severity === 'warning').length;
   const note = `${errors} error${errors === 1 ? '' : 's'}, ${warnings} warning${warnings === 1 ? '' : 's'}`;
-  const sel = Math.min(selected, Math.max(0, lines.length - 1));
-  const rows: { segs: Seg[]; key: string }[] = [];
-  if (findings.length === 0) rows.push({ key: 'none', segs: [{ text: 'no findings: every check passes', style: theme.ok() }] });
-  lines.forEach((l, k) => {
-    const tagStyle = l.tag === 'error' || l.tag === 'warning' || l.tag === 'info' ? theme.severity(l.tag) : l.tag === 'caution' ? theme.severity('warning') : theme.muted();
-    const isSel = isFocused && k === sel;
-    rows.push({ key: `l${k}`, segs: [{ text: TAGS[l.tag], style: tagStyle }, { text: ` ${l.text}`, style: isSel ? theme.selected(true) : undefined }] });
-    if (l.detail && (isSel || (width >= 100 && l.tag !== 'spread'))) rows.push({ key: `d${k}`, segs: [{ text: `     ${l.detail}`, style: theme.muted() }] });
-  });
-  const visible = Math.max(1, height - 1);
-  const selRow = Math.max(0, rows.findIndex((r) => r.key === `l${sel}`));
-  const start = scrollStart(selRow, rows.length, visible);
-  const shown = rows.slice(start, start + visible);
-  const more = rows.length > visible ? ` ${start + 1}-${start + shown.length}/${rows.length}` : '';
+  const view = findingsView(lines, { isClean: findings.length === 0, selected, isFocused, width, visible: Math.max(1, height - 1), isWide: width >= 100 });
   return (
     <Box flexDirection="column" width={width} height={height}>
-      <PaneTitle title="Findings" note={`${note}${more}`} isFocused={isFocused} width={width} theme={theme} />
-      {shown.map((r) => <Line key={r.key} width={width} segs={r.segs} />)}
+      <PaneTitle title="Findings" note={view.position ? `${note} ${view.position}` : note} isFocused={isFocused} width={width} theme={theme} />
+      {view.rows.map((r) => <Line key={r.key} width={width} segs={rowSegs(r, r.entry === view.selectedEntry && r.part === 'text', theme)} />)}
     </Box>
   );
 }

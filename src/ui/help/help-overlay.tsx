@@ -1,6 +1,7 @@
 import { Box } from 'ink';
 import { Line } from '../common/line';
 import { PaneTitle } from '../common/pane-title';
+import { wrapWords } from '../common/wrap-words';
 import { fit } from '../format';
 import type { KeyContext } from '../keymap';
 import type { Theme } from '../theme';
@@ -21,22 +22,6 @@ const KEY_W = 14;
 
 /** One screen row of the help. */
 type HelpRow = { kind: 'heading'; text: string } | { kind: 'binding'; keys: string; text: string; isOff: boolean };
-
-/** Splits `text` at spaces into pieces of at most `width` cells (a longer word is cut). */
-export function wrapWords(text: string, width: number): string[] {
-  const out: string[] = [];
-  let line = '';
-  for (const word of text.split(' ')) {
-    const next = line ? `${line} ${word}` : word;
-    if ([...next].length <= width) line = next;
-    else {
-      if (line) out.push(line);
-      line = [...word].length > width ? [...word].slice(0, width).join('') : word;
-    }
-  }
-  out.push(line);
-  return out;
-}
 
 /** The help as screen rows `width` cells wide: long descriptions continue on the next row, never cut. */
 export function helpRows(ctx: KeyContext, ascii: boolean, width: number): HelpRow[] {
