@@ -59,13 +59,15 @@ function violation(a: number, b: number, x: number, sign: number): number {
 /**
  * The exact event-driven sweep of ENGINE.md §2: settles a consistent state at `min`, then walks from
  * event to event up to `max` and back down, settling cascades and reporting bands with no stable
- * state. Iterations are bounded by the element count.
+ * state. Iterations are bounded by the element count. Settling starts from everything off, or from
+ * `guess` (e.g. the nominal circuit's starting state when sweeping a perturbed copy), which saves
+ * the solves of flipping into it when it is already consistent.
  */
-export function sweep(solver: Solver, min: number, max: number): SweepResult {
+export function sweep(solver: Solver, min: number, max: number, guess?: State): SweepResult {
   const net = solver.net;
   const count = net.comparators.length + net.diodes.length;
   const result: SweepResult = { flips: [], segments: [], bands: [], initial: new Uint8Array(count) };
-  let state: State = new Uint8Array(count);
+  let state: State = guess && guess.length === count ? guess.slice() : new Uint8Array(count);
   state = settle(solver, state, min, 'up', result, max);
   // Settling the starting state is not a transition of the circuit: only later flips are trips.
   result.flips.length = 0;

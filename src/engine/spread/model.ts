@@ -20,6 +20,8 @@ export interface SpreadModel {
   channels: string[];
   /** One solver re-valued for every perturbed copy (they share the nominal wiring). */
   solver: Solver;
+  /** The nominal circuit's consistent state at the bottom of the range: each trial starts from it. */
+  start: Uint8Array;
 }
 
 /** Trip points of one evaluation, per channel in model order (unit of x; NaN when absent). */
@@ -33,18 +35,21 @@ export interface TripSample {
 /** Builds the spread model of `design` with `options` (SpreadOptions). Pure. */
 export function buildSpreadModel(design: Design, options: SpreadOptions = {}): SpreadModel {
   const net = buildNetwork(design);
-  return { design, net, params: spreadParameters(design, net, options), channels: net.comparators.map((c) => c.id), solver: new Solver(net) };
+  const solver = new Solver(net);
+  const start = sweep(solver, design.quantity.min, design.quantity.max).initial;
+  return { design, net, params: spreadParameters(design, net, options), channels: net.comparators.map((c) => c.id), solver, start };
 }
 
 /**
  * Sweeps `net` over the design's range and writes each comparator's first rising and first falling
  * transition into `rising`/`falling` at `offset + k` (unit of x; NaN when the channel never flips).
- * Returns true when a band with no stable state was found.
+ * With `model`, its solver is re-valued for `net` (same wiring) and settling starts from the nominal
+ * starting state. Returns true when a band with no stable state was found.
  */
-export function sweepTrips(design: Design, net: Network, rising: Float64Array, falling: Float64Array, offset = 0, solver?: Solver): boolean {
+export function sweepTrips(design: Design, net: Network, rising: Float64Array, falling: Float64Array, offset = 0, model?: SpreadModel): boolean {
   const nc = net.comparators.length;
-  if (solver) solver.load(net);
-  const result = sweep(solver ?? new Solver(net), design.quantity.min, design.quantity.max);
+  if (model) model.solver.load(net);
+  const result = sweep(model?.solver ?? new Solver(net), design.quantity.min, design.quantity.max, model?.start);
   for (let k = 0; k < nc; k++) {
     rising[offset + k] = NaN;
     falling[offset + k] = NaN;
@@ -62,6 +67,6 @@ export function evaluateAt(model: SpreadModel, units: ArrayLike<number>): TripSa
   const n = model.channels.length;
   const rising = new Float64Array(n);
   const falling = new Float64Array(n);
-  const chatter = sweepTrips(model.design, perturbNetwork(model.net, model.params, units), rising, falling, 0, model.solver);
+  const chatter = sweepTrips(model.design, perturbNetwork(model.net, model.params, units), rising, falling, 0, model);
   return { rising, falling, chatter };
 }

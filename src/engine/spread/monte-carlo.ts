@@ -44,7 +44,7 @@ export function runTrials(model: SpreadModel, seed: number, from: number, to: nu
   for (let i = 0; i < count; i++) {
     trialUnits(model, seed, from + i, units);
     const net = perturbNetwork(model.net, model.params, units);
-    block.chatter[i] = sweepTrips(model.design, net, block.rising, block.falling, i * n, model.solver) ? 1 : 0;
+    block.chatter[i] = sweepTrips(model.design, net, block.rising, block.falling, i * n, model) ? 1 : 0;
     onTrial?.(i + 1);
   }
   return block;
