@@ -20,7 +20,7 @@ export function analyze(design: Design, prepared: Prepared = prepare(design)): A
       direction: s.direction,
       from: s.from,
       to: s.to,
-      low: Object.fromEntries(p.net.comparators.map((c, k) => [c.id, s.state[k] === 1])),
+      low: lowMap(p, s.state),
       lit: litMap(p, s.state, (s.from + s.to) / 2),
     })),
     chatter: p.sweep.bands.map((b) => ({
@@ -45,6 +45,8 @@ export interface SegmentStats {
   nodeMax: Record<string, number>;
   /** Per resistor designator, worst dissipation (W). */
   dissipation: Record<string, number>;
+  /** The same as a list, for loops. */
+  powers: { id: string; watts: number }[];
   /** Per channel id, largest sink current (A); per LED channel id, largest LED current (A). */
   sinkMax: Record<string, number>;
   ledMax: Record<string, number>;
@@ -67,10 +69,11 @@ function segmentStats(p: Prepared): SegmentStats {
   for (const seg of p.sweep.segments) {
     const sol = p.solver.solve(seg.state);
     const { v0, v1 } = sol;
+    const [i0, i1] = p.solver.sourceCurrent(sol, net.supplySource);
     for (let e = 0; e < 2; e++) {
       const x = e === 0 ? seg.from : seg.to;
       samples.push({ x, sol, state: seg.state });
-      const i = supplyCurrentAt(p, sol, x);
+      const i = i0 + i1 * x + net.quiescent;
       if (i < supply.min) {
         supply.min = i;
         supply.minAt = x;
@@ -110,6 +113,7 @@ function segmentStats(p: Prepared): SegmentStats {
     nodeMin: {},
     nodeMax: {},
     dissipation: {},
+    powers: [],
     sinkMax: {},
     ledMax: {},
     samples,
@@ -118,12 +122,13 @@ function segmentStats(p: Prepared): SegmentStats {
     st.nodeMin[name] = Number.isFinite(vmin[k]) ? vmin[k] : 0;
     st.nodeMax[name] = Number.isFinite(vmax[k]) ? vmax[k] : 0;
   });
-  net.resistors.forEach((r, k) => (st.dissipation[r.id] = power[k]));
+  net.resistors.forEach((r, k) => st.powers.push({ id: r.id, watts: power[k] }));
   net.comparators.forEach((c, k) => (st.sinkMax[c.id] = sinkMax[k]));
   net.diodes.forEach((d, k) => {
     if (d.channel) st.ledMax[d.channel] = ledMax[k];
-    if (d.seriesId) st.dissipation[d.seriesId] = ledPower[k];
+    if (d.seriesId) st.powers.push({ id: d.seriesId, watts: ledPower[k] });
   });
+  for (const { id, watts } of st.powers) st.dissipation[id] = watts;
   return st;
 }
 
@@ -167,6 +172,14 @@ function tapResults(p: Prepared, st: SegmentStats): TapResult[] {
   }));
 }
 
+/** Output state per channel id (true = sinking), keys in network order. */
+function lowMap(p: Prepared, state: Uint8Array): Record<string, boolean> {
+  const low: Record<string, boolean> = {};
+  const comparators = p.net.comparators;
+  for (let k = 0; k < comparators.length; k++) low[comparators[k].id] = state[k] === 1;
+  return low;
+}
+
 /**
  * LED current from which an indicator counts as lit (A). Below it an LED may still conduct, e.g. the
  * few microamperes an open output leaks through its feedback resistor: a faint glow, not a reading.
@@ -199,10 +212,9 @@ export function probe(p: Prepared, x: number, direction: Direction): ProbeResult
   const nc = p.net.comparators.length;
   const nodes: Record<string, number> = { gnd: 0 };
   p.net.nodes.forEach((name, k) => (nodes[name] = voltAt(sol, k, x)));
-  const low: Record<string, boolean> = {};
+  const low = lowMap(p, state);
   const sinkCurrent: Record<string, number> = {};
   p.net.comparators.forEach((c, k) => {
-    low[c.id] = state[k] === 1;
     sinkCurrent[c.id] = state[k] ? Math.max(0, (voltAt(sol, c.out, x) - c.vsat0) / c.rsat) : 0;
   });
   const ledCurrent: Record<string, number> = {};

@@ -45,13 +45,14 @@ export function runChecks(p: Prepared, a: Analysis, st: SegmentStats): Finding[]
     const vs = voltAt(s.sol, net.supply, s.x);
     if (vs < part.supplyMin && (!supplyLow || vs < supplyLow.v)) supplyLow = { v: vs, x: s.x };
     if (vs > part.supplyMax && (!supplyHigh || vs > supplyHigh.v)) supplyHigh = { v: vs, x: s.x };
+    const top = vs - part.cmHeadroom;
     for (const c of net.comparators) {
-      for (const pin of [c.plus, c.minus]) {
-        const v = voltAt(s.sol, pin, s.x);
-        const top = vs - part.cmHeadroom;
+      for (let side = 0; side < 2; side++) {
+        const v = voltAt(s.sol, side === 0 ? c.plus : c.minus, s.x);
         const over = Math.max(v - top, part.cmMin - v);
+        if (!(over > 0)) continue;
         const prev = cmWorst.get(c.id);
-        if (over > 0 && (!prev || over > prev.over)) cmWorst.set(c.id, { over, x: s.x, v, low: v < part.cmMin });
+        if (!prev || over > prev.over) cmWorst.set(c.id, { over, x: s.x, v, low: v < part.cmMin });
       }
     }
   }
@@ -83,7 +84,7 @@ export function runChecks(p: Prepared, a: Analysis, st: SegmentStats): Finding[]
         r.id.startsWith('RF:') ? 'Lower the series input resistor (or the string impedance) so a smaller feedback resistor gives the same hysteresis.' : 'Scale the surrounding resistors down.');
     }
   }
-  for (const [id, w] of Object.entries(st.dissipation)) {
+  for (const { id, watts: w } of st.powers) {
     if (w > DEFAULT_RESISTOR_RATING) {
       add('warning', 'dissipation', id, null, formatEng(w, 'W'),
         `${id} dissipates up to ${formatEng(w, 'W')}, over the ${formatEng(DEFAULT_RESISTOR_RATING, 'W')} assumed rating.`,
