@@ -1,19 +1,21 @@
 /**
  * Runs key-table actions: pure ones through the reducer, the rest (files, drafts, settings, planner,
- * spread, quitting) through the injected services. Keys never reach the reducer directly.
+ * spread, quitting) through the injected services. Keys never reach the reducer directly. File and
+ * analysis actions live beside this file; this one keeps the refs and maps each action to its work.
  */
-import { basename, resolve } from 'node:path';
 import { type Dispatch, useEffect, useRef } from 'react';
-import type { Design } from '../../engine/design/types';
-import { type ExportFormat, exportNeedsSpread } from '../../engine/export/export-text';
 import type { PresetInfo } from '../../store/presets';
 import type { Settings } from '../../store/settings';
 import type { ActionName } from '../keymap';
 import type { Services, SpreadJob } from '../services';
 import { isModified } from '../state/app-reducer';
 import type { AppAction, AppState } from '../state/app-state';
-import { exportPathSuggestion } from '../state/export-path';
 import { settingRows } from '../settings/settings-rows';
+import type { ActionContext } from './action-context';
+import { analysisActions } from './analysis-actions';
+import { fileActions } from './file-actions';
+
+export { sameDesign } from './file-actions';
 
 /** Inputs of useController. */
 export interface ControllerOptions {
@@ -37,11 +39,6 @@ export interface Controller {
   run(action: ActionName): void;
 }
 
-/** Same design, ignoring object identity. */
-export function sameDesign(a: Design, b: Design): boolean {
-  return JSON.stringify(a) === JSON.stringify(b);
-}
-
 /** The action runner. */
 export function useController(o: ControllerOptions): Controller {
   const { state: s, dispatch, services } = o;
@@ -53,129 +50,10 @@ export function useController(o: ControllerOptions): Controller {
     services.presets?.().then((list) => (presets.current = list), () => undefined);
   }, [services]);
   const say = (text: string, tone: 'info' | 'ok' | 'error' = 'info') => dispatch({ type: 'message', message: { text, tone } });
+  const c: ActionContext = { s, dispatch, services, setSettings: o.setSettings, exit: o.exit, armed, quitAfterSave, spreadJob, presets, say };
+  const { saveTo, submitPath, startExport, suggestion } = fileActions(c);
+  const { plan, startSpread, cancelSpread } = analysisActions(c);
   const span = s.design.quantity.max - s.design.quantity.min;
-
-  const saveTo = async (path: string) => {
-    try {
-      await services.writeDesign(path, s.design);
-    } catch (e) {
-      const msg = `cannot save ${path}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}. Choose another folder or name (S).`;
-      if (s.prompt) dispatch({ type: 'prompt-error', message: msg });
-      else say(msg, 'error');
-      quitAfterSave.current = false;
-      return;
-    }
-    if (s.file !== path) services.drafts.clear(s.file);
-    services.drafts.clear(path);
-    o.setSettings(services.settings.addRecent(path));
-    dispatch({ type: 'saved', design: s.design, file: path, name: basename(path) });
-    if (quitAfterSave.current) o.exit(0);
-  };
-
-  const openPreset = async (preset: PresetInfo) => {
-    const read = await services.readDesign(preset.path);
-    if (!read.ok) {
-      dispatch({ type: 'prompt-error', message: read.message.split('\n').slice(0, 2).join(' ') });
-      return;
-    }
-    // A preset opens as a new design: s asks for a name, so the built-in file is never overwritten.
-    dispatch({ type: 'loaded', design: read.design, file: null, name: `${preset.id}.tapline.json (preset)`, message: { text: `opened preset ${preset.id}: ${read.design.name}. s saves a copy under a name you choose`, tone: 'ok' } });
-  };
-
-  const openFile = async (path: string) => {
-    const read = await services.readDesign(path);
-    if (!read.ok) {
-      dispatch({ type: 'prompt-error', message: read.message.split('\n').slice(0, 2).join(' ') });
-      return;
-    }
-    o.setSettings(services.settings.addRecent(path));
-    dispatch({ type: 'loaded', design: read.design, file: path, name: basename(path), message: { text: `opened ${path}${read.warnings.length ? ` (${read.warnings[0]})` : ''}`, tone: 'ok' } });
-    const draft = services.drafts.load(path);
-    if (draft && !sameDesign(draft.design, read.design)) dispatch({ type: 'ask', question: { kind: 'draft', draft } });
-  };
-
-  const submitPath = () => {
-    const p = s.prompt;
-    if (!p) return;
-    const text = p.text.trim();
-    if (text === '') {
-      const n = presets.current.length;
-      dispatch({ type: 'prompt-error', message: p.kind === 'open'
-        ? `open: type a file path${n ? `, or ↑/↓ to pick one of ${n} preset${n === 1 ? '' : 's'}` : ' such as gauge.tapline.json'}`
-        : 'save as: no file name: type a path such as gauge.tapline.json' });
-      return;
-    }
-    const path = resolve(services.cwd, text);
-    if (p.kind === 'open') {
-      const preset = services.fileExists(path) ? undefined : presets.current.find((x) => x.id === text || `${x.id}.tapline.json` === text);
-      if (isModified(s) && armed.current !== path) {
-        armed.current = path;
-        dispatch({ type: 'prompt-error', message: 'open: this design has unsaved changes (kept as a draft): press Enter again to open anyway, Esc to go back and save' });
-        return;
-      }
-      armed.current = null;
-      void (preset ? openPreset(preset) : openFile(path));
-      return;
-    }
-    if (p.kind === 'export' && path === s.file) {
-      dispatch({ type: 'prompt-error', message: `export: ${path} is the design file itself: choose another name` });
-      return;
-    }
-    if (p.kind === 'save-as' || p.kind === 'export') {
-      if (path !== s.file && services.fileExists(path) && armed.current !== path) {
-        armed.current = path;
-        dispatch({ type: 'prompt-error', message: `${p.kind === 'export' ? 'export' : 'save as'}: ${path} exists: press Enter again to replace it, or change the name` });
-        return;
-      }
-      armed.current = null;
-      if (p.kind === 'save-as') void saveTo(path);
-      else if (p.format) exportTo(path, p.format, text);
-    }
-  };
-
-  /** Writes the export; the prompt closes at once and the message line follows the work. */
-  const exportTo = (path: string, format: ExportFormat, shown: string) => {
-    if (!services.exportDesign) return;
-    const spread = s.spread.state === 'done' && s.spread.design === s.design ? s.spread.result.report : undefined;
-    dispatch({ type: 'prompt-cancel' });
-    say(exportNeedsSpread(format) && !spread ? `exporting ${format}: running the spread first (m shows it on screen)...` : `exporting ${format}...`);
-    services.exportDesign(path, s.design, format, spread).then(
-      () => say(`exported ${format} to ${shown}`, 'ok'),
-      (e: NodeJS.ErrnoException) => say(`export: cannot write ${shown}: ${e.code ?? e.message}. Check the folder exists and is writable, then x again.`, 'error'),
-    );
-  };
-
-  const startExport = (format: ExportFormat) => {
-    dispatch({ type: 'ask', question: null });
-    const label = { spice: 'SPICE netlist', bom: 'parts CSV', report: 'report', json: 'JSON' }[format];
-    dispatch({ type: 'prompt-open', kind: 'export', format, label: `export ${label} to`, text: exportPathSuggestion(s.file, s.name, services.cwd, format) });
-  };
-
-  const suggestion = () => {
-    if (s.file) return basename(s.file);
-    const bare = s.name.replace(/ \((demo|preset)\)$/, '');
-    return bare.endsWith('.json') ? bare : `${bare}.tapline.json`;
-  };
-
-  const startSpread = () => {
-    if (!services.spread) return;
-    const design = s.design;
-    const job = services.spread(design, (done, total) => dispatch({ type: 'spread', status: { state: 'running', done, total } }));
-    spreadJob.current = job;
-    dispatch({ type: 'spread', status: { state: 'running', done: 0, total: 1 } });
-    job.result.then(
-      (result) => {
-        if (spreadJob.current !== job) return;
-        spreadJob.current = null;
-        dispatch({ type: 'spread', status: result ? { state: 'done', design, result } : { state: 'idle' } });
-        say(result ? `spread done: ${result.trials} trials (see Findings)` : 'spread cancelled');
-      },
-      (e: Error) => {
-        spreadJob.current = null;
-        dispatch({ type: 'spread', status: { state: 'failed', message: e.message } });
-      },
-    );
-  };
 
   const changeSetting = (delta: number) => {
     const row = settingRows(o.settings)[s.overlayIndex];
@@ -219,18 +97,9 @@ export function useController(o: ControllerOptions): Controller {
       case 'export-report': return startExport('report');
       case 'export-json': return startExport('json');
       case 'export-cancel': return dispatch({ type: 'ask', question: null });
-      case 'plan': {
-        if (!services.plan) return;
-        const out = services.plan(s.design);
-        if (out.ok) return dispatch({ type: 'replace-design', design: out.design, message: `re-planned: ${out.summary} (u undoes)` });
-        return say(`plan: ${out.message}`, 'error');
-      }
+      case 'plan': return plan();
       case 'spread': return startSpread();
-      case 'spread-cancel':
-        spreadJob.current?.cancel();
-        spreadJob.current = null;
-        dispatch({ type: 'spread', status: { state: 'idle' } });
-        return say('spread cancelled');
+      case 'spread-cancel': return cancelSpread();
       case 'settings': return dispatch({ type: 'overlay', overlay: 'settings' });
       case 'help': return dispatch({ type: 'overlay', overlay: 'help' });
       case 'quit': return quit();
