@@ -47,6 +47,20 @@ export interface SweepResult {
 /** Numerical zero for margins (V). */
 const TOL = 1e-12;
 
+/**
+ * Starting guess at x: every comparator high, and every diode conducting where it would conduct with
+ * all of them off. With the comparators fixed the diodes' states are unique (a resistive network with
+ * monotone diodes has one solution), so this guess changes no result; it only spares the solves of
+ * switching the diodes on one at a time.
+ */
+function diodeGuess(solver: Solver, x: number): State {
+  const nc = solver.net.comparators.length;
+  const state: State = new Uint8Array(nc + solver.net.diodes.length);
+  const off = solver.solve(state);
+  for (let k = nc; k < state.length; k++) if (off.da[k] + off.db[k] * x > 0) state[k] = 1;
+  return state;
+}
+
 /** How badly element k's state is violated just past x in `dir` (0 when consistent). */
 function violation(a: number, b: number, x: number, sign: number): number {
   const m = a + b * x;
@@ -59,7 +73,7 @@ function violation(a: number, b: number, x: number, sign: number): number {
 /**
  * The exact event-driven sweep of ENGINE.md §2: settles a consistent state at `min`, then walks from
  * event to event up to `max` and back down, settling cascades and reporting bands with no stable
- * state. Iterations are bounded by the element count. Settling starts from everything off, or from
+ * state. Iterations are bounded by the element count. Settling starts from `diodeGuess`, or from
  * `guess` (e.g. the nominal circuit's starting state when sweeping a perturbed copy), which saves
  * the solves of flipping into it when it is already consistent.
  */
@@ -67,7 +81,7 @@ export function sweep(solver: Solver, min: number, max: number, guess?: State): 
   const net = solver.net;
   const count = net.comparators.length + net.diodes.length;
   const result: SweepResult = { flips: [], segments: [], bands: [], initial: new Uint8Array(count) };
-  let state: State = guess && guess.length === count ? guess.slice() : new Uint8Array(count);
+  let state: State = guess && guess.length === count ? guess.slice() : diodeGuess(solver, min);
   state = settle(solver, state, min, 'up', result, max);
   // Settling the starting state is not a transition of the circuit: only later flips are trips.
   result.flips.length = 0;

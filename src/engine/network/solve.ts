@@ -52,13 +52,12 @@ class Branches {
 }
 
 /**
- * Hands out views of one backing buffer, so the many small arrays of a solver and its solutions cost
- * one allocation instead of one (off-heap, garbage-collected) buffer each.
+ * Hands out views of one backing buffer, so the fixed arrays of a solver cost one allocation instead
+ * of one (off-heap, garbage-collected) buffer each.
  */
 class Arena {
   private buffer: Float64Array;
-  /** Doubles handed out of the current buffer; may be wound back to reuse them. */
-  used = 0;
+  private used = 0;
   constructor(private readonly chunk: number) {
     this.buffer = new Float64Array(chunk);
   }
@@ -127,8 +126,6 @@ export class Solver {
   private readonly first: Int32Array;
   private readonly count: number;
   private readonly arena: Arena;
-  /** Arena mark after the fixed buffers: solutions are taken from here on. */
-  private readonly mark: number;
   private readonly held0: Float64Array;
   private readonly held1: Float64Array;
   private readonly baseA: Float64Array;
@@ -149,6 +146,8 @@ export class Solver {
   private readonly cMinus: number[];
   private readonly cVos: number[];
   private readonly cache = new Map<number | string, Solution>();
+  /** Solutions dropped by `load`, whose arrays the next solves refill instead of allocating. */
+  private readonly spare: Solution[] = [];
 
   /** Prepares `net`; pass the layout of an identically wired network to skip recomputing it. */
   constructor(net: Network, layout: SolverLayout = solverLayout(net)) {
@@ -160,8 +159,7 @@ export class Solver {
     this.first = layout.first;
     this.nu = nu;
     this.count = net.comparators.length + net.diodes.length;
-    const perSolution = 2 * n + 2 * this.count;
-    this.arena = new Arena(2 * nu * nu + 6 * nu + 4 * n + 24 * perSolution);
+    this.arena = new Arena(2 * nu * nu + 6 * nu + 4 * n);
     this.held0 = this.arena.take(n);
     this.held1 = this.arena.take(n);
     this.inj0 = this.arena.take(n);
@@ -172,7 +170,6 @@ export class Solver {
     this.baseR1 = this.arena.take(nu);
     this.r0 = this.arena.take(nu);
     this.r1 = this.arena.take(nu);
-    this.mark = this.arena.used;
     this.fixed = new Branches(net.resistors.length);
     this.on = new Branches(this.count);
     this.off = new Branches(this.count);
@@ -185,12 +182,13 @@ export class Solver {
 
   /**
    * Takes the element values of `net`, which must be wired exactly like the network this solver was
-   * built for. Earlier solutions are dropped and their storage reused.
+   * built for. Earlier solutions are dropped and their storage reused: results that still refer to
+   * them (the segments of an earlier sweep) are no longer valid.
    */
   load(net: Network): void {
     this.net = net;
+    for (const sol of this.cache.values()) this.spare.push(sol);
     this.cache.clear();
-    this.arena.used = this.mark;
     const { nu, held0, held1, inj0, inj1, baseA, baseR0, baseR1 } = this;
     held0.fill(0);
     held1.fill(0);
@@ -311,16 +309,18 @@ export class Solver {
       this.stampState(state);
       ok = luSolve2(this.work, nu, r0, r1);
     }
-    const v0 = this.arena.take(n);
-    const v1 = this.arena.take(n);
+    // Refill a dropped solution when there is one: no new arrays in the steady state of a spread run.
+    const sol = this.spare.pop() ?? {
+      v0: new Float64Array(n), v1: new Float64Array(n), da: new Float64Array(state.length), db: new Float64Array(state.length),
+      ok, state: new Uint8Array(state.length),
+    };
+    const { v0, v1, da, db } = sol;
     for (let k = 0; k < n; k++) {
       const s = this.slot[k];
       v0[k] = s < 0 ? this.held0[k] : r0[s];
       v1[k] = s < 0 ? this.held1[k] : r1[s];
     }
     const nc = this.cPlus.length;
-    const da = this.arena.take(state.length);
-    const db = this.arena.take(state.length);
     for (let k = 0; k < nc; k++) {
       const p = this.cPlus[k];
       const q = this.cMinus[k];
@@ -332,7 +332,9 @@ export class Solver {
       da[k] = at(v0, on.a[k]) - at(v0, on.b[k]) - on.e[k];
       db[k] = at(v1, on.a[k]) - at(v1, on.b[k]);
     }
-    return { v0, v1, da, db, ok, state: state.slice() };
+    sol.ok = ok;
+    sol.state.set(state);
+    return sol;
   }
 }
 
