@@ -29,6 +29,21 @@ const ENG_PREFIX: Record<number, string> = {
 /** Unit symbols that take SI prefixes; any other unit (%, °C, m of level, ...) is written plainly. */
 const PREFIXABLE = new Set(['', 'V', 'A', 'Ω', 'Ω', 'ohm', 'W', 'F', 'Hz', 's', 'Ah', 'Wh', 'J']);
 
+/** Whether `unit` takes SI prefixes (V, A, Ω, W, F, ...); %, °C and other units do not. */
+export function takesSiPrefix(unit: string): boolean {
+  return PREFIXABLE.has(unit);
+}
+
+/**
+ * A number in the style of `unit` but without it: engineering prefix for units that take one
+ * ("99.4m" for volts), plain decimals otherwise ("0.180" for %). For table cells whose column title
+ * names the unit.
+ */
+export function formatBare(value: number, unit: string, opts: { digits?: number; ascii?: boolean } = {}): string {
+  if (takesSiPrefix(unit) || !Number.isFinite(value) || value === 0) return formatEng(value, '', opts);
+  return plainDecimal(value, sigDigits(opts.digits));
+}
+
 /** `value` to `digits` significant figures in plain decimal notation (no exponent, no prefix). */
 function plainDecimal(value: number, digits: number): string {
   const magnitude = Math.floor(Math.log10(Math.abs(value)));

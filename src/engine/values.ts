@@ -6,7 +6,7 @@
  */
 import { create, unitDependencies, type Unit } from 'mathjs';
 
-export { formatEng, formatRkm } from './value-format.js';
+export { formatBare, formatEng, formatRkm, takesSiPrefix } from './value-format.js';
 
 /** The mathjs instance, made on first use: creating it costs more than the rest of start-up. */
 let lazyMath: ReturnType<typeof create> | null = null;

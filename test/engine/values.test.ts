@@ -1,7 +1,7 @@
 import { all, create } from 'mathjs';
 import { describe, expect, test } from 'vitest';
 import type { SeriesName } from '../../src/engine/design/types.js';
-import { formatEng, formatRkm, parseValue, type ValueUnit } from '../../src/engine/values.js';
+import { formatBare, formatEng, formatRkm, parseValue, type ValueUnit } from '../../src/engine/values.js';
 import { iecValues } from '../helpers/iec-60063.js';
 
 /** Reference library for unit conversion. */
@@ -182,5 +182,17 @@ describe('formatEng for units that take no SI prefix', () => {
 
   test('large plain values are not rounded into exponent notation', () => {
     expect(formatEng(1234.5, 'mm')).toBe('1235 mm');
+  });
+});
+
+describe('formatBare', () => {
+  // Table cells whose column title names the unit: prefixes only where the SI allows them (BIPM SI
+  // Brochure, 9th ed., §5.4.6).
+  test('volts keep the engineering prefix without the unit', () => {
+    expect(formatBare(0.0994, 'V', { digits: 3 })).toBe('99.4m');
+  });
+
+  test('percent is written in plain decimals', () => {
+    expect(formatBare(0.18, '%', { digits: 2 })).toBe('0.18');
   });
 });

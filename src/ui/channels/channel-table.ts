@@ -4,7 +4,7 @@
  */
 import type { ChannelResult } from '../../engine/analysis-types';
 import type { Design } from '../../engine/design/types';
-import { formatEng } from '../../engine/values';
+import { formatBare, formatEng } from '../../engine/values';
 import { fmtA, fmtDx, fmtOhm, fmtX } from '../format';
 import type { TargetMatch } from '../state/target-match';
 
@@ -38,7 +38,7 @@ const t = (text: string): Cell => [{ text }];
 
 function xText(x: number | null | undefined, inp: TableInput, digits = 4): string {
   if (x === null || x === undefined) return inp.ascii ? '-' : '—';
-  return inp.hasUnits ? fmtX(x, inp.design, inp.ascii, digits) : formatEng(x, '', { digits, ascii: inp.ascii });
+  return inp.hasUnits ? fmtX(x, inp.design, inp.ascii, digits) : formatBare(x, inp.design.quantity.unit, { digits, ascii: inp.ascii });
 }
 
 function loadCell(d: Design, id: string): Cell {
@@ -67,7 +67,7 @@ export function allColumns(inp: TableInput): Column[] {
     cols.push(
       { key: 'target', head: 'target', width: xw, priority: 70, align: 'right', cell: (c) => t(inp.targets[c.id] ? xText(inp.targets[c.id].target.x, inp) : '') },
       { key: 'error', head: 'off by', width: inp.hasUnits ? 9 : 7, priority: 75, align: 'right',
-        cell: (c) => t(inp.targets[c.id] ? (inp.hasUnits ? fmtDx(inp.targets[c.id].error, d, inp.ascii) : signed(inp.targets[c.id].error, inp.ascii)) : '') },
+        cell: (c) => t(inp.targets[c.id] ? (inp.hasUnits ? fmtDx(inp.targets[c.id].error, d, inp.ascii) : signed(inp.targets[c.id].error, d.quantity.unit, inp.ascii)) : '') },
     );
   }
   cols.push(
@@ -93,8 +93,8 @@ export function allColumns(inp: TableInput): Column[] {
   return cols;
 }
 
-function signed(v: number, ascii: boolean): string {
-  const s = formatEng(v, '', { digits: 2, ascii });
+function signed(v: number, unit: string, ascii: boolean): string {
+  const s = formatBare(v, unit, { digits: 2, ascii });
   return v > 0 ? `+${s}` : s;
 }
 
