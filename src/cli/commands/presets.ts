@@ -1,6 +1,7 @@
 import { parseArgs } from 'node:util';
 import { relative } from 'node:path';
 import { listPresets } from '../../store/presets';
+import { wrapWords } from '../../ui/common/wrap-words';
 import { EXIT, type CliIo } from '../../io';
 import type { Command } from '../command';
 
@@ -38,9 +39,12 @@ export const presetsCommand: Command = {
       return problems.length ? EXIT.input : EXIT.ok;
     }
     const width = Math.max(0, ...presets.map((p) => p.id.length));
+    const indent = ' '.repeat(width + 2);
     for (const p of presets) {
       const shown = relative(io.cwd, p.path);
-      io.out(`${p.id.padEnd(width)}  ${p.name}\n${' '.repeat(width)}  ${p.description}\n${' '.repeat(width)}  ${shown.startsWith('..') ? p.path : shown}\n`);
+      // Descriptions wrap to an 80-column terminal under the name; the path stays whole.
+      const about = wrapWords(p.description, Math.max(30, 78 - indent.length)).map((l) => `${indent}${l}\n`).join('');
+      io.out(`${p.id.padEnd(width)}  ${p.name}\n${about}${indent}${shown.startsWith('..') ? p.path : shown}\n`);
     }
     return problems.length ? EXIT.input : EXIT.ok;
   },
