@@ -1,4 +1,5 @@
 import { parseArgs } from 'node:util';
+import pkg from '../../package.json';
 import { checkCommand } from './commands/check';
 import { exportCommand } from './commands/export';
 import { planCommand } from './commands/plan';
@@ -7,8 +8,8 @@ import { spreadCommand } from './commands/spread';
 import { EXIT, type CliIo } from '../io';
 import type { Command } from './command';
 
-/** Version printed by --version; kept in step with package.json by the build. */
-export const VERSION = '0.1.0';
+/** Version printed by --version: package.json's, bundled in at build time. */
+export const VERSION: string = pkg.version;
 
 /** Every sub-command, in the order `--help` lists them. */
 export const COMMANDS: Command[] = [checkCommand, planCommand, spreadCommand, exportCommand, presetsCommand];
