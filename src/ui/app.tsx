@@ -60,7 +60,9 @@ export function App({ initial, services, noColor, onExit, size: fixedSize, onFlu
   const footerRows = state.prompt?.error ? 2 : 1;
   const overlayHeight = layout ? layout.rows - 2 - footerRows : 1;
   const controller: Controller = useController({
-    state, dispatch, services, settings, setSettings, plotWidth, helpLength: layout ? helpScrollCount(ctx, theme.isAscii, layout.columns, overlayHeight) : 1,
+    state, dispatch, services, settings, setSettings, plotWidth,
+    // Only read while the help overlay is open: wrapping every help line on each keystroke is a good part of a frame.
+    helpLength: layout && state.overlay === 'help' ? helpScrollCount(ctx, theme.isAscii, layout.columns, overlayHeight) : 1,
     flushDraft: autosave.flush,
     exit: (code) => {
       onExit(code);

@@ -1,8 +1,8 @@
 import { Box } from 'ink';
 import type { ChannelResult } from '../../engine/analysis-types';
 import type { Design } from '../../engine/design/types';
-import { Line, type Seg } from '../common/line';
-import { PaneTitle } from '../common/pane-title';
+import type { Seg } from '../common/line';
+import { PaneText } from '../common/pane-title';
 import { fit, right } from '../format';
 import { scrollStart } from '../layout';
 import type { TargetMatch } from '../state/target-match';
@@ -46,16 +46,15 @@ export function ChannelsPane(props: ChannelsPaneProps) {
   const unitNote = isWide ? '' : `x in ${design.quantity.unit}, sink in A`;
   const more = channels.length > visible ? ` ${start + 1}-${start + rows.length}/${channels.length}` : '';
   const head: Seg[] = [{ text: ' ' }, ...cols.map((c) => ({ text: `${c.align === 'right' ? right(c.head, c.width) : fit(c.head, c.width)} `, style: theme.muted() }))];
+  const lines = rows.map((c) => {
+    const mark = c.id === selectedChannel && isFocused ? theme.glyphs.focus.slice(0, 1) : ' ';
+    const segs: Seg[] = [{ text: mark }];
+    for (const col of cols) segs.push(...cellSegs(col, c, selectedId, isFocused, theme), { text: ' ' });
+    return segs;
+  });
   return (
     <Box flexDirection="column" width={width} height={height}>
-      <PaneTitle title="Channels" note={`${unitNote}${more}`.trim() || undefined} isFocused={isFocused} width={width} theme={theme} />
-      <Line width={width} segs={head} />
-      {rows.map((c) => {
-        const mark = c.id === selectedChannel && isFocused ? theme.glyphs.focus.slice(0, 1) : ' ';
-        const segs: Seg[] = [{ text: mark }];
-        for (const col of cols) segs.push(...cellSegs(col, c, selectedId, isFocused, theme), { text: ' ' });
-        return <Line key={c.id} width={width} segs={segs} />;
-      })}
+      <PaneText width={width} title={{ title: 'Channels', note: `${unitNote}${more}`.trim() || undefined, isFocused, width, theme }} rows={[head, ...lines]} />
     </Box>
   );
 }

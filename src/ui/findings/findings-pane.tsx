@@ -1,8 +1,8 @@
 import { Box } from 'ink';
 import type { Finding } from '../../engine/analysis-types';
 import type { Design } from '../../engine/design/types';
-import { Line, type Seg } from '../common/line';
-import { PaneTitle } from '../common/pane-title';
+import type { Seg } from '../common/line';
+import { PaneText } from '../common/pane-title';
 import type { SpreadStatus } from '../state/app-state';
 import type { Theme } from '../theme';
 import { type FindingLine, findingLines } from './findings-lines';
@@ -43,8 +43,7 @@ export function FindingsPane({ design, findings, spread, selected, isFocused, wi
   const view = findingsView(lines, { isClean: findings.length === 0, selected, isFocused, width, visible: Math.max(1, height - 1), isWide: width >= 100 });
   return (
     <Box flexDirection="column" width={width} height={height}>
-      <PaneTitle title="Findings" note={view.position ? `${note} ${view.position}` : note} isFocused={isFocused} width={width} theme={theme} />
-      {view.rows.map((r) => <Line key={r.key} width={width} segs={rowSegs(r, r.entry === view.selectedEntry && r.part === 'text', theme)} />)}
+      <PaneText width={width} title={{ title: 'Findings', note: view.position ? `${note} ${view.position}` : note, isFocused, width, theme }} rows={view.rows.map((r) => rowSegs(r, r.entry === view.selectedEntry && r.part === 'text', theme))} />
     </Box>
   );
 }

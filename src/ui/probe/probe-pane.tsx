@@ -1,8 +1,8 @@
 import { Box } from 'ink';
 import type { ProbeResult } from '../../engine/analysis-types';
 import type { Design } from '../../engine/design/types';
-import { Line, type Seg } from '../common/line';
-import { PaneTitle } from '../common/pane-title';
+import type { Seg } from '../common/line';
+import { PaneText } from '../common/pane-title';
 import { fmtA, fmtX } from '../format';
 import type { Theme } from '../theme';
 
@@ -39,8 +39,7 @@ export function ProbePane({ design, probe, width, height, theme }: ProbePaneProp
   if (!probe) {
     return (
       <Box flexDirection="column" width={width} height={height}>
-        <PaneTitle title="Probe" isFocused={false} width={width} theme={theme} />
-        <Line width={width} segs={[{ text: 'no solution at the probe', style: theme.error() }]} />
+        <PaneText width={width} title={{ title: 'Probe', isFocused: false, width, theme }} rows={[[{ text: 'no solution at the probe', style: theme.error() }]]} />
       </Box>
     );
   }
@@ -65,8 +64,7 @@ export function ProbePane({ design, probe, width, height, theme }: ProbePaneProp
   }
   return (
     <Box flexDirection="column" width={width} height={height}>
-      <PaneTitle title="Probe" note={`${fmtX(probe.x, design, ascii)} ${dir}`} isFocused={false} width={width} theme={theme} />
-      {lines.slice(0, Math.max(0, height - 1)).map((segs, k) => <Line key={k} width={width} segs={segs} />)}
+      <PaneText width={width} title={{ title: 'Probe', note: `${fmtX(probe.x, design, ascii)} ${dir}`, isFocused: false, width, theme }} rows={lines.slice(0, Math.max(0, height - 1))} />
     </Box>
   );
 }

@@ -1,8 +1,7 @@
 import { Box } from 'ink';
 import type { ProbeResult } from '../../engine/analysis-types';
 import type { Design } from '../../engine/design/types';
-import { Line } from '../common/line';
-import { PaneTitle } from '../common/pane-title';
+import { PaneText } from '../common/pane-title';
 import type { Field } from '../state/fields';
 import { scrollStart } from '../layout';
 import type { Theme } from '../theme';
@@ -32,17 +31,10 @@ export function StringPane({ design, fields, selectedId, probe, isFocused, width
   const note = lines.length > visible ? `${start + 1}-${start + shown.length}/${lines.length}` : undefined;
   return (
     <Box flexDirection="column" width={width} height={height}>
-      <PaneTitle title="String" note={note} isFocused={isFocused} width={width} theme={theme} />
-      {shown.map((l, k) => (
-        <Line
-          key={k}
-          width={width}
-          segs={l.segs.map((s) => ({
-            text: s.text,
-            style: s.fieldId && s.fieldId === selectedId ? theme.selected(isFocused) : s.isMuted ? theme.muted() : undefined,
-          }))}
-        />
-      ))}
+      <PaneText width={width} title={{ title: 'String', note, isFocused, width, theme }} rows={shown.map((l) => l.segs.map((s) => ({
+        text: s.text,
+        style: s.fieldId && s.fieldId === selectedId ? theme.selected(isFocused) : s.isMuted ? theme.muted() : undefined,
+      })))} />
     </Box>
   );
 }

@@ -1,8 +1,8 @@
 import { Box } from 'ink';
 import type { Analysis } from '../../engine/analysis-types';
 import type { Design } from '../../engine/design/types';
-import { Line, type Seg } from '../common/line';
-import { PaneTitle } from '../common/pane-title';
+import type { Seg } from '../common/line';
+import { PaneText } from '../common/pane-title';
 import { fmtX, right } from '../format';
 import { scrollStart } from '../layout';
 import { type Cell, columnOf, sweepCells } from '../state/sweep-cells';
@@ -52,21 +52,20 @@ export function SweepPane({ design, analysis, probeX, selectedChannel, width, he
   axis[cursor] = g.cursor;
   const axisText = axis.join('');
   const legend = `${g.cellBoth} on ${g.cellUp} rising ${g.cellDown} falling`;
+  const lines = shown.map((id): Seg[] => {
+    const row = cells[id];
+    const text = row.map((c) => glyph[c]).join('');
+    return [
+      { text: right(`${id} `, labelW), style: id === selectedChannel ? theme.title(false) : theme.muted() },
+      { text: text.slice(0, cursor), style: theme.on() },
+      { text: glyph[row[cursor]], style: { ...theme.on(), inverse: true } },
+      { text: text.slice(cursor + 1), style: theme.on() },
+    ];
+  });
+  lines.push([{ text: ' '.repeat(labelW) }, { text: axisText, style: theme.title(false) }]);
   return (
     <Box flexDirection="column" width={width} height={height}>
-      <PaneTitle title="Sweep" note={`${lo}..${hi}  ${legend}`} isFocused={false} width={width} theme={theme} />
-      {shown.map((id) => {
-        const row = cells[id];
-        const text = row.map((c) => glyph[c]).join('');
-        const segs: Seg[] = [
-          { text: right(`${id} `, labelW), style: id === selectedChannel ? theme.title(false) : theme.muted() },
-          { text: text.slice(0, cursor), style: theme.on() },
-          { text: glyph[row[cursor]], style: { ...theme.on(), inverse: true } },
-          { text: text.slice(cursor + 1), style: theme.on() },
-        ];
-        return <Line key={id} width={width} segs={segs} />;
-      })}
-      <Line width={width} segs={[{ text: ' '.repeat(labelW) }, { text: axisText, style: theme.title(false) }]} />
+      <PaneText width={width} title={{ title: 'Sweep', note: `${lo}..${hi}  ${legend}`, isFocused: false, width, theme }} rows={lines} />
     </Box>
   );
 }

@@ -1,8 +1,7 @@
 import { Box } from 'ink';
 import type { ChannelResult } from '../../engine/analysis-types';
 import type { Design } from '../../engine/design/types';
-import { Line } from '../common/line';
-import { PaneTitle } from '../common/pane-title';
+import { PaneText } from '../common/pane-title';
 import { fit, fmtDx, fmtX } from '../format';
 import { scrollStart } from '../layout';
 import { fieldText } from '../state/app-reducer';
@@ -48,9 +47,7 @@ export function TargetsPane({ design, fields, matches, selectedId, isFocused, pl
   const note = planDisabled ? `plan: ${planDisabled}` : 'p re-plans';
   return (
     <Box flexDirection="column" width={width} height={height}>
-      <PaneTitle title="Targets" note={note} isFocused={isFocused} width={width} theme={theme} />
-      {rows.length === 0 && <Line width={width} segs={[{ text: 'this design states no targets', style: theme.muted() }]} />}
-      {rows.slice(start, start + visible).map((r) => <Line key={r.id} width={width} segs={r.segs} />)}
+      <PaneText width={width} title={{ title: 'Targets', note, isFocused, width, theme }} rows={rows.length === 0 ? [[{ text: 'this design states no targets', style: theme.muted() }]] : rows.slice(start, start + visible).map((r) => r.segs)} />
     </Box>
   );
 }
