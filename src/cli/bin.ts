@@ -18,6 +18,10 @@ const openTui = async (file: string | undefined, cliIo: CliIo) => {
     delete process.env.CI;
     delete process.env.CONTINUOUS_INTEGRATION;
   }
+  // The layout engine under Ink loads its WebAssembly through fetch when one exists, which pulls in
+  // Node's whole HTTP client (about 40 ms at start-up); without it the module decodes the bytes
+  // directly. The screen itself makes no network requests.
+  delete (globalThis as { fetch?: unknown }).fetch;
   return (await import('../ui/run')).openTui(file, cliIo);
 };
 
