@@ -130,7 +130,7 @@ export async function benchTui(): Promise<BenchResult[]> {
       const s = ptySession(`'${node}' '${binPath()}'`, env);
       starts.push(await s.until(FRAME_MARK, t0));
       if (k === 0) {
-        for (let j = 0; j < 10; j++) {
+        for (let j = 0; j < 30; j++) {
           // Past the autosave delay, so the draft write of the previous edit is not timed with this key.
           await sleep(400);
           s.mark();
