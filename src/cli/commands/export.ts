@@ -1,7 +1,7 @@
-import { parseArgs } from 'node:util';
 import { resolve } from 'node:path';
 import { EXPORT_FORMATS as FORMATS, EXPORT_TRIALS, type ExportFormat as Format, exportText } from '../../engine/export/export-text';
-import { readDesignFile, writeFileAtomic } from '../../store/files';
+import { writeFileAtomic } from '../../store/files';
+import { parseCommand, readDesignArg } from '../args';
 import { EXIT, type CliIo } from '../../io';
 import type { Command } from '../command';
 
@@ -30,37 +30,17 @@ export const exportCommand: Command = {
   summary: 'write a design as SPICE netlist, bill of materials, report or JSON',
   usage: 'tapline export FILE --to FORMAT',
   async run(args: string[], io: CliIo): Promise<number> {
-    let parsed;
-    try {
-      parsed = parseArgs({
-        args,
-        allowPositionals: true,
-        options: { to: { type: 'string' }, out: { type: 'string' }, table: { type: 'boolean' }, help: { type: 'boolean', short: 'h' } },
-      });
-    } catch (e) {
-      io.err(`tapline export: ${(e as Error).message}\n${USAGE}`);
-      return EXIT.input;
-    }
+    const parsed = parseCommand('export', USAGE, args, io, { to: { type: 'string' }, out: { type: 'string' }, table: { type: 'boolean' } });
+    if ('exit' in parsed) return parsed.exit;
     const v = parsed.values;
-    if (v.help) {
-      io.out(USAGE);
-      return EXIT.ok;
-    }
-    if (parsed.positionals.length !== 1) {
-      io.err(`tapline export: give exactly one design file (got ${parsed.positionals.length}).\n${USAGE}`);
-      return EXIT.input;
-    }
     if (!v.to || !FORMATS.includes(v.to as Format)) {
       io.err(`tapline export: --to is ${v.to === undefined ? 'missing' : `"${v.to}"`}; give one of ${FORMATS.join(', ')}, e.g. --to report.\n`);
       return EXIT.input;
     }
-    const read = await readDesignFile(resolve(io.cwd, parsed.positionals[0]));
-    if (!read.ok) {
-      io.err(`${read.message}\n`);
-      return EXIT.input;
-    }
+    const design = await readDesignArg(parsed.file, io);
+    if (!design) return EXIT.input;
     const format = v.to as Format;
-    const text = exportText({ design: read.design, format, isTable: v.table });
+    const text = exportText({ design, format, isTable: v.table });
     if (!v.out) {
       io.out(text);
       return EXIT.ok;
