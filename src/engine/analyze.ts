@@ -3,7 +3,7 @@ import { runChecks } from './checks';
 import type { Design } from './design/types';
 import type { Solution } from './network/solve';
 import { type Prepared, prepare, stateAt, supplyCurrentAt, voltAt } from './prepare';
-import type { Direction } from './sweep';
+import { type Direction, firstFlip } from './sweep';
 
 /**
  * The full exact analysis of a design (ENGINE.md §2 and §5): trip points and hysteresis of every
@@ -141,8 +141,8 @@ function channelResults(p: Prepared, st: SegmentStats): ChannelResult[] {
   return net.comparators.map((c, k) => {
     const ch = design.channels.find((d) => d.id === c.id);
     // Flips at x = min are the initial settle (the output's starting state), not a trip.
-    const up = p.sweep.flips.find((f) => f.element === k && f.direction === 'up');
-    const down = p.sweep.flips.find((f) => f.element === k && f.direction === 'down');
+    const up = firstFlip(p.sweep, k, 'up');
+    const down = firstFlip(p.sweep, k, 'down');
     const trip = (f: typeof up): Trip | null => (f ? { x: f.x, pinPlus: f.pinPlus, pinMinus: f.pinMinus } : null);
     const signalIsMinus = ch?.plus === 'in' ? false : true;
     const pin = (f: NonNullable<typeof up>) => (signalIsMinus ? f.pinMinus : f.pinPlus);

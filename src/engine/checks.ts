@@ -1,6 +1,7 @@
 import type { Analysis, Finding, Severity } from './analysis-types';
 import type { SegmentStats } from './analyze';
 import { type Prepared, prepare, voltAt } from './prepare';
+import { firstFlip } from './sweep';
 import { formatEng } from './values';
 
 /** Resistor power rating assumed when the design names none (W): common practice, no source. */
@@ -184,9 +185,7 @@ function checkSupplyShift(p: Prepared, a: Analysis, add: Add, fx: (x: number) =>
 function analyzeTrips(p: Prepared): Map<string, { rising: number | null; falling: number | null }> {
   const out = new Map<string, { rising: number | null; falling: number | null }>();
   p.net.comparators.forEach((c, k) => {
-    const up = p.sweep.flips.find((f) => f.element === k && f.direction === 'up');
-    const down = p.sweep.flips.find((f) => f.element === k && f.direction === 'down');
-    out.set(c.id, { rising: up?.x ?? null, falling: down?.x ?? null });
+    out.set(c.id, { rising: firstFlip(p.sweep, k, 'up')?.x ?? null, falling: firstFlip(p.sweep, k, 'down')?.x ?? null });
   });
   return out;
 }

@@ -47,6 +47,11 @@ export interface SweepResult {
 /** Numerical zero for margins (V). */
 const TOL = 1e-12;
 
+/** The first flip of `element` in `direction`, or undefined when it never changes going that way. */
+export function firstFlip(result: SweepResult, element: number, direction: Direction): Flip | undefined {
+  return result.flips.find((f) => f.element === element && f.direction === direction);
+}
+
 /**
  * Starting guess at x: every comparator high, and every diode conducting where it would conduct with
  * all of them off. With the comparators fixed the diodes' states are unique (a resistive network with

@@ -36,16 +36,21 @@ export class Reader {
    */
   value(raw: FileValue, path: string, unit: ValueUnit, rule?: (v: number) => string | undefined): number {
     const read = parseValue(raw, unit);
-    if (!read.ok) {
-      this.problem(path, raw, trimEcho(read.message, raw));
+    return this.checked(raw, path, read.ok ? read.value : null, read.ok ? '' : trimEcho(read.message, raw), rule);
+  }
+
+  /** `value` once read (null with `message` when it did not parse), checked against `rule`. */
+  private checked(raw: FileValue, path: string, value: number | null, message: string, rule?: (v: number) => string | undefined): number {
+    if (value === null) {
+      this.problem(path, raw, message);
       return Number.NaN;
     }
-    const broken = rule?.(read.value);
+    const broken = rule?.(value);
     if (broken) {
       this.problem(path, raw, broken);
       return Number.NaN;
     }
-    return read.value;
+    return value;
   }
 
   /** Like `value`, but `raw` is absent and `fallback` (SI) is used instead when so. */
@@ -62,16 +67,7 @@ export class Reader {
     if (known) return this.value(raw, path, known, rule);
     const text = typeof raw === 'string' && raw.trimEnd().endsWith(this.xUnit) ? raw.trimEnd().slice(0, -this.xUnit.length) : raw;
     const read = parseValue(text, 'none');
-    if (!read.ok) {
-      this.problem(path, raw, `not a number of ${this.xUnit}: write e.g. 12 or "12 ${this.xUnit}"`);
-      return Number.NaN;
-    }
-    const broken = rule?.(read.value);
-    if (broken) {
-      this.problem(path, raw, broken);
-      return Number.NaN;
-    }
-    return read.value;
+    return this.checked(raw, path, read.ok ? read.value : null, `not a number of ${this.xUnit}: write e.g. 12 or "12 ${this.xUnit}"`, rule);
   }
 }
 
