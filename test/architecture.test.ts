@@ -29,9 +29,13 @@ describe('layering', () => {
     }
   });
 
-  test('mathjs is imported by src/engine/values.ts only', () => {
+  test('mathjs is imported by src/engine/unit-reader.ts only, and that only by values.ts on first need', () => {
     const users = sources('src').filter(({ text }) => imports(text).includes('mathjs')).map((s) => s.file);
-    expect(users).toEqual(['src/engine/values.ts']);
+    expect(users).toEqual(['src/engine/unit-reader.ts']);
+    const readers = sources('src').filter(({ text }) => imports(text).some((spec) => spec.endsWith('/unit-reader'))).map((s) => s.file);
+    expect(readers).toEqual(['src/engine/values.ts']);
+    // A static import would put mathjs back on every start-up path.
+    expect(sources('src').find((s) => s.file === 'src/engine/values.ts')?.text).toMatch(/import\('\.\/unit-reader'\)/);
   });
 
   test('the UI never imports the CLI, and the store never imports the UI or the CLI', () => {

@@ -1,25 +1,57 @@
 /**
- * Reading and writing component values. The only module that touches mathjs (for unit-bearing
- * text such as "4.7 kohm" or a wrong unit such as "5 mA" where ohms are expected). Everything
+ * Reading and writing component values. Unit names and wrong units ("3 volts", or "5 mA" where ohms
+ * are expected) go to the unit reader (mathjs, in unit-reader.ts, loaded on first need). Everything
  * returned is a plain SI number; text is only produced by the format functions (re-exported here
  * from value-format.ts, which needs no mathjs).
  */
-import { create, unitDependencies, type Unit } from 'mathjs';
+import type { UnitReader } from './unit-reader';
 
 export { formatBare, formatEng, formatRkm, takesSiPrefix } from './value-format.js';
 
-/** The mathjs instance, made on first use: creating it costs more than the rest of start-up. */
-let lazyMath: ReturnType<typeof create> | null = null;
-function mathjs(): ReturnType<typeof create> {
-  lazyMath ??= create({ unitDependencies });
-  return lazyMath;
+/**
+ * The unit reader (a mathjs instance), null until `loadUnitReader` has finished. Loading mathjs
+ * takes longer than the rest of start-up, and almost every value is read without it (plain numbers,
+ * RKM codes, SI prefixes and the unit's own symbol), so it is loaded only when some text needs it.
+ */
+let reader: UnitReader | null = null;
+let loading: Promise<void> | null = null;
+/** How many reads have needed the unit reader before it was loaded (see `withUnitReader`). */
+let misses = 0;
+
+/** Loads the unit reader; every call shares one load. Resolves when `parseValue` can use it. */
+export function loadUnitReader(): Promise<void> {
+  loading ??= import('./unit-reader').then((m) => {
+    reader = m.createUnitReader();
+  });
+  return loading;
+}
+
+/**
+ * Runs `attempt` (which reads values with `parseValue`); when some value needed the unit reader
+ * before it was loaded, loads it and runs `attempt` again, so the result is as if it had always
+ * been there. `attempt` must not have side effects that matter when repeated.
+ */
+export async function withUnitReader<T>(attempt: () => T): Promise<T> {
+  const before = misses;
+  const first = attempt();
+  if (misses === before) return first;
+  await loadUnitReader();
+  return attempt();
+}
+
+function mathjs(): UnitReader | null {
+  if (!reader) misses++;
+  return reader;
 }
 
 /** What a value is measured in: ohms, volts, amperes, watts, farads, a ratio (1 % = 0.01) or a bare number. */
 export type ValueUnit = 'ohm' | 'V' | 'A' | 'W' | 'F' | 'ratio' | 'none';
 
 /** The outcome of reading a value: the SI number, or a message naming the value and what is allowed. */
-export type ParseResult = { ok: true; value: number } | { ok: false; message: string };
+export type ParseResult =
+  | { ok: true; value: number }
+  /** `needsUnitReader`: the text needs the unit reader, which is not loaded yet (see `loadUnitReader`). */
+  | { ok: false; message: string; needsUnitReader?: true };
 
 /** SI prefix letters accepted in text, as powers of ten. `u` stands for µ; `K` is taken as kilo. */
 const PREFIX: Record<string, number> = {
@@ -122,7 +154,7 @@ function readOwn(text: string, unit: ValueUnit): number | null {
   return /\d/.test(rest) ? readPlain(rest, unit) : null;
 }
 
-function fail(input: string, unit: ValueUnit, why?: string): ParseResult {
+function fail(input: string, unit: ValueUnit, why?: string): { ok: false; message: string } {
   const info = UNITS[unit];
   const head = why ? `"${input}" ${why}` : `"${input}" is not ${info.noun}`;
   return { ok: false, message: `${head}: write ${info.examples}` };
@@ -130,17 +162,19 @@ function fail(input: string, unit: ValueUnit, why?: string): ParseResult {
 
 function readWithUnit(text: string, input: string, unit: ValueUnit): ParseResult {
   const info = UNITS[unit];
-  let parsed: Unit;
+  const math = mathjs();
+  if (!math) return { ...fail(input, unit, 'needs the unit reader, which is not loaded yet'), needsUnitReader: true };
+  let parsed: ReturnType<UnitReader['unit']>;
   try {
-    parsed = mathjs().unit(text);
+    parsed = math.unit(text);
   } catch {
     return fail(input, unit);
   }
   if (parsed.value === null) return fail(input, unit, `has no number`);
-  if (info.mathjs && parsed.equalBase(mathjs().unit(info.mathjs))) {
+  if (info.mathjs && parsed.equalBase(math.unit(info.mathjs))) {
     return { ok: true, value: clean(parsed.toNumber(info.mathjs)) };
   }
-  const found = DIMENSIONS.find(([name]) => parsed.equalBase(mathjs().unit(name)));
+  const found = DIMENSIONS.find(([name]) => parsed.equalBase(math.unit(name)));
   return fail(input, unit, found ? `is ${found[1]}, not ${info.noun}` : `has the wrong unit for ${info.noun}`);
 }
 
@@ -151,6 +185,8 @@ function readWithUnit(text: string, input: string, unit: ValueUnit): ParseResult
  * "470 µA", "50 mV"), and for ratios a percentage ("1 %", "0.5%") or ppm. `unit` names what the
  * value must be; text in another unit is refused with a message saying what was expected.
  * Resistances must be > 0; powers and capacitances ≥ 0; voltages and currents may be negative.
+ * Unit names beyond the unit's own symbol ("3 volts") and the "is a current, not ..." messages come
+ * from the unit reader: read such text through `withUnitReader`, or after `loadUnitReader`.
  */
 export function parseValue(input: string | number, unit: ValueUnit): ParseResult {
   const shown = String(input);

@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { readFile, rename, unlink, writeFile } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 import { formatProblems, parseDesign } from '../engine/design/load';
+import { withUnitReader } from '../engine/values';
 import type { Design } from '../engine/design/types';
 
 /** Outcome of reading a design file: the design, or one readable message (several lines). */
@@ -20,15 +21,15 @@ export async function readDesignFile(path: string): Promise<ReadResult> {
   return parseDesignText(text, basename(path));
 }
 
-/** Parses design JSON text; `name` labels messages. Never throws. */
-export function parseDesignText(text: string, name: string): ReadResult {
+/** Parses design JSON text; `name` labels messages. Never throws (the promise never rejects). */
+export async function parseDesignText(text: string, name: string): Promise<ReadResult> {
   let json: unknown;
   try {
     json = JSON.parse(text);
   } catch (e) {
     return { ok: false, message: `${name}: not valid JSON: ${(e as Error).message}. Fix the syntax (a trailing comma or a missing quote is the usual cause).` };
   }
-  const parsed = parseDesign(json);
+  const parsed = await withUnitReader(() => parseDesign(json));
   if (!parsed.ok) return { ok: false, message: formatProblems(parsed.problems, name) };
   return { ok: true, design: parsed.design, warnings: parsed.warnings };
 }

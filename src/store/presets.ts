@@ -77,6 +77,6 @@ export async function readPreset(path: string): Promise<{ ok: true; design: Desi
   } catch (e) {
     return { ok: false, message: `${path}: cannot read the preset: ${(e as Error).message}.` };
   }
-  const parsed = parseDesignText(text, path);
+  const parsed = await parseDesignText(text, path);
   return parsed.ok ? { ok: true, design: parsed.design } : { ok: false, message: parsed.message };
 }

@@ -26,7 +26,7 @@ test('plans the preset, writes FILE.planned.tapline.json that reads back, exit 0
   expect(out).toMatch(/Packages and channels/);
   expect(out).toMatch(/Target vs realised/);
   const text = await readFile(join(dir, 'gauge.planned.tapline.json'), 'utf8');
-  const back = parseDesignText(text, 'gauge.planned.tapline.json');
+  const back = await parseDesignText(text, 'gauge.planned.tapline.json');
   expect(back.ok).toBe(true);
 });
 
@@ -43,7 +43,7 @@ test('--out naming the input is refused without --in-place (exit 2)', async () =
 
 test('--in-place overwrites the input', async () => {
   expect(await main(['plan', 'gauge.tapline.json', '--in-place'], io())).toBe(0);
-  const back = parseDesignText(await readFile(join(dir, 'gauge.tapline.json'), 'utf8'), 'x');
+  const back = await parseDesignText(await readFile(join(dir, 'gauge.tapline.json'), 'utf8'), 'x');
   expect(back.ok && back.design.channels[0].id).toBe('charge-1');
 });
 

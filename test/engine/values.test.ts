@@ -1,8 +1,11 @@
 import { all, create } from 'mathjs';
-import { describe, expect, test } from 'vitest';
+import { beforeAll, describe, expect, test } from 'vitest';
 import type { SeriesName } from '../../src/engine/design/types.js';
-import { formatBare, formatEng, formatRkm, parseValue, type ValueUnit } from '../../src/engine/values.js';
+import { formatBare, formatEng, formatRkm, loadUnitReader, parseValue, type ValueUnit } from '../../src/engine/values.js';
 import { iecValues } from '../helpers/iec-60063.js';
+
+// Unit names and wrong-unit messages come from the unit reader, loaded on first need.
+beforeAll(() => loadUnitReader());
 
 /** Reference library for unit conversion. */
 const math = create(all);

@@ -90,5 +90,10 @@ export function renderApp(opts: { services?: Services; state?: AppState; columns
       await settle();
     }
   };
-  return { ...r, services, exits, press, frame: () => r.lastFrame() ?? '' };
+  const frame = () => r.lastFrame() ?? '';
+  /** Waits until the frame contains `text` (for work that finishes later, such as a module load). */
+  const waitFor = async (text: string, timeoutMs = 10_000) => {
+    for (const end = Date.now() + timeoutMs; !frame().includes(text) && Date.now() < end; ) await settle(20);
+  };
+  return { ...r, services, exits, press, frame, waitFor };
 }

@@ -47,6 +47,8 @@ describe('App', () => {
   it('types a value in a prompt and shows a refused one inline', async () => {
     const app = renderApp();
     await app.press(KEYS.enter, '\u0015', '4', 'x', '7', KEYS.enter);
+    // Text the quick readers refuse goes to the unit reader, which is loaded at that moment.
+    await app.waitFor('RS1: "4x7"');
     expect(app.frame()).toContain('RS1: "4x7" is not a value in ohms');
     await app.press(KEYS.backspace, KEYS.backspace, 'k', '7', KEYS.enter);
     expect(app.frame()).toContain('RS1 3k09 -> 4k7');

@@ -4,6 +4,7 @@
  * analysis actions live beside this file; this one keeps the refs and maps each action to its work.
  */
 import { type Dispatch, useEffect, useRef } from 'react';
+import { loadUnitReader } from '../../engine/values';
 import type { PresetInfo } from '../../store/presets';
 import type { Settings } from '../../store/settings';
 import type { ActionName } from '../keymap';
@@ -49,6 +50,15 @@ export function useController(o: ControllerOptions): Controller {
   useEffect(() => {
     services.presets?.().then((list) => (presets.current = list), () => undefined);
   }, [services]);
+  // Text with a unit name ("3 volts") needs the unit reader, loaded on first need; Enter then counts.
+  const awaitingUnits = s.prompt?.awaitingUnits === true;
+  useEffect(() => {
+    if (!awaitingUnits) return;
+    loadUnitReader().then(
+      () => dispatch({ type: 'prompt-submit' }),
+      () => dispatch({ type: 'prompt-error', message: 'unit names cannot be read here: write the value as 4k7, 4.7k or 4700' }),
+    );
+  }, [awaitingUnits, dispatch]);
   const say = (text: string, tone: 'info' | 'ok' | 'error' = 'info') => dispatch({ type: 'message', message: { text, tone } });
   const c: ActionContext = { s, dispatch, services, setSettings: o.setSettings, exit: o.exit, armed, quitAfterSave, spreadJob, presets, say };
   const { saveTo, submitPath, startExport, suggestion } = fileActions(c);

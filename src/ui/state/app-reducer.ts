@@ -98,6 +98,7 @@ function submitValue(s: AppState): AppState {
     return { ...edit(s, f.set(s.design, name), `${f.label} ${name}`), prompt: null };
   }
   const read = parseValue(p.text, f.unit);
+  if (!read.ok && read.needsUnitReader) return { ...s, prompt: { ...p, awaitingUnits: true } };
   if (!read.ok) return { ...s, prompt: { ...p, error: `${f.label}: ${read.message}` } };
   const before = fieldText(f, s.design);
   const next = f.set(s.design, read.value);
@@ -109,6 +110,7 @@ function submitProbe(s: AppState): AppState {
   if (!p) return s;
   const q = s.design.quantity;
   const read = parseValue(p.text, xValueUnit(q.unit));
+  if (!read.ok && read.needsUnitReader) return { ...s, prompt: { ...p, awaitingUnits: true } };
   if (!read.ok) return { ...s, prompt: { ...p, error: `probe: ${read.message}` } };
   if (read.value < q.min || read.value > q.max) {
     const range = `${formatEng(q.min, q.unit, { digits: 4 })} to ${formatEng(q.max, q.unit, { digits: 4 })}`;

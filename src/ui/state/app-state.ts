@@ -24,6 +24,8 @@ export interface PromptState {
   recentIndex: number;
   /** Format of an `export` prompt. */
   format?: ExportFormat;
+  /** True while Enter waits for the unit reader to load (the text names a unit beyond its symbol). */
+  awaitingUnits?: boolean;
 }
 
 /** A question that takes one key: quit with unsaved work, restore a draft, or which format to export. */

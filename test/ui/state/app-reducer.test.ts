@@ -1,10 +1,14 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { loadUnitReader } from '../../../src/engine/values';
 import { appReducer, initialState, isModified, selectedField } from '../../../src/ui/state/app-reducer';
 import type { AppAction, AppState } from '../../../src/ui/state/app-state';
 import { demoDesign } from '../../helpers/ui';
 
 const start = () => initialState(demoDesign(), null, 'demo');
 const run = (s: AppState, ...actions: AppAction[]) => actions.reduce(appReducer, s);
+
+// Wrong-unit messages ("is a current") come from the unit reader.
+beforeAll(() => loadUnitReader());
 
 describe('app reducer', () => {
   it('starts on the first string resistor with the probe mid-range', () => {
