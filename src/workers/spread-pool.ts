@@ -1,43 +1,33 @@
 /**
- * Runs a spread analysis over worker threads so every core is used and the caller stays
- * responsive: progress callback, cancellation through an AbortSignal. Trials are handed out in
- * chunks to whichever worker is free; results are joined in trial order, and each trial's random
- * stream depends only on (seed, trial), so the thread count never changes the numbers.
+ * Runs spread analyses over worker threads so every core is used and the caller stays responsive.
+ * A `SpreadPool` keeps its workers between runs (their compiled code stays warm): create it once,
+ * `run` as often as needed, `close` at the end. Trials are handed out in chunks to whichever worker is
+ * free; results are joined in trial order, and each trial's random stream depends only on
+ * (seed, trial), so the thread count never changes the numbers.
  *
- * The worker script is dist/spread-worker.js beside the bundle (see `defaultWorkerUrl`). When it
- * cannot be started (running from sources, or `threads: 0`) the same chunks run in this thread,
- * yielding to the event loop between chunks.
+ * The worker script is dist/spread-worker.js (see `defaultWorkerUrl`). When it cannot be started
+ * (running from sources, or `threads: 0`) the same chunks run in this thread, yielding to the event
+ * loop between chunks.
  */
+import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
-import { Worker } from 'node:worker_threads';
 import type { Design } from '../engine/design/types';
-import {
-  buildSpreadModel,
-  DEFAULT_TRIALS,
-  joinBlocks,
-  runTrials,
-  type SpreadReport,
-  type SpreadRunOptions,
-  summarize,
-  type TrialBlock,
-  worstCase,
-  type WorstCase,
-} from '../engine/spread';
-import type { SpreadJob, SpreadReply, SpreadWorkerData } from './spread-protocol';
+import { buildSpreadModel, DEFAULT_TRIALS, joinBlocks, type SpreadReport, type SpreadRunOptions, summarize } from '../engine/spread';
+import { abortError, DEFAULT_CHUNK, type Outcome, pickModelOptions, type RunControl, runHere, spreadJobs } from './spread-jobs';
+import { WorkerSet } from './worker-set';
 
-/** How the work is spread over threads. */
-export interface PoolOptions {
+export type { RunControl } from './spread-jobs';
+
+/** How a pool is set up. */
+export interface SpreadPoolOptions {
   /** Worker threads; 0 runs everything in this thread. Default: the available parallelism. */
   threads?: number;
-  /** Trials per job handed to a worker; default 250. */
-  chunk?: number;
   /** Worker script (an ES module); default `defaultWorkerUrl()`. */
   workerUrl?: URL | string;
-  /** Called after each finished chunk with trials done and the total. */
-  onProgress?: (done: number, total: number) => void;
-  /** Aborting it stops the workers and rejects with an error named `AbortError`. */
-  signal?: AbortSignal;
 }
+
+/** Options of a one-off parallel run: the pool's and the run's. */
+export type PoolOptions = SpreadPoolOptions & RunControl;
 
 /** A finished parallel run: the report and how many worker threads did it (0 = this thread). */
 export interface ParallelSpread {
@@ -45,117 +35,111 @@ export interface ParallelSpread {
   threads: number;
 }
 
-/** The worker script beside this module once bundled: dist/spread-worker.js next to dist/tapline.js. */
+/**
+ * The worker script: dist/spread-worker.js. The bundle may put this module in dist/ or in a shared
+ * chunk under dist/chunks/, so both places are looked at; from sources neither exists.
+ */
 export function defaultWorkerUrl(): URL {
-  return new URL('./spread-worker.js', import.meta.url);
+  const beside = new URL('./spread-worker.js', import.meta.url);
+  const above = new URL('../spread-worker.js', import.meta.url);
+  return !existsSync(beside) && existsSync(above) ? above : beside;
 }
 
-/** Runs worst case and Monte Carlo for `design`, spread over worker threads. */
-export async function runSpreadParallel(design: Design, options: SpreadRunOptions & PoolOptions = {}): Promise<ParallelSpread> {
-  const model = buildSpreadModel(design, options);
-  const seed = options.seed ?? 1;
-  const trials = options.trials ?? DEFAULT_TRIALS;
-  const chunk = Math.max(1, Math.floor(options.chunk ?? 250));
-  const jobs: SpreadJob[] = [];
-  if (options.worstCase !== false) jobs.push({ kind: 'worst', job: 0 });
-  for (let from = 0; from < trials; from += chunk) jobs.push({ kind: 'trials', job: jobs.length, seed, from, to: Math.min(trials, from + chunk) });
-  const threads = Math.max(0, Math.min(Math.floor(options.threads ?? availableParallelism()), jobs.length));
-  const data: SpreadWorkerData = { design, options: pickModelOptions(options) };
-  let outcome: Outcome | null = null;
-  if (threads > 0) outcome = await runOnWorkers(jobs, data, threads, trials, options);
-  const used = outcome ? threads : 0;
-  outcome ??= await runHere(jobs, model, trials, options);
-  const report = summarize(model, joinBlocks(outcome.blocks, model.channels.length), seed, outcome.worst, options);
-  return { report, threads: used };
-}
-
-interface Outcome {
-  blocks: TrialBlock[];
-  worst: WorstCase | null;
-}
-
-function abortError(): Error {
-  const e = new Error('spread analysis cancelled');
-  e.name = 'AbortError';
-  return e;
-}
-
-/** Structured-clone-safe copy of the options that shape the model and the worst-case search. */
-function pickModelOptions(o: SpreadRunOptions): SpreadWorkerData['options'] {
-  const { resistorTolerance, partTolerance, referenceTolerance, partLimit, ledKneeSpread, supplyRange, distributions, maxCornerParameters } = o;
-  return JSON.parse(JSON.stringify({ resistorTolerance, partTolerance, referenceTolerance, partLimit, ledKneeSpread, supplyRange, distributions, maxCornerParameters }));
-}
-
-async function runHere(jobs: SpreadJob[], model: ReturnType<typeof buildSpreadModel>, total: number, o: SpreadRunOptions & PoolOptions): Promise<Outcome> {
-  const out: Outcome = { blocks: [], worst: null };
-  let done = 0;
-  for (const job of jobs) {
-    await new Promise((resolve) => setImmediate(resolve));
-    if (o.signal?.aborted) throw abortError();
-    if (job.kind === 'worst') {
-      out.worst = worstCase(model, o);
-      continue;
-    }
-    out.blocks.push(runTrials(model, job.seed, job.from, job.to));
-    done += job.to - job.from;
-    o.onProgress?.(done, total);
-  }
-  return out;
+function closedError(): Error {
+  return new Error('the spread pool is closed; create a new one');
 }
 
 /**
- * Runs the jobs on `threads` workers. Resolves null when the workers cannot start (no worker script),
- * so the caller can fall back to this thread; rejects on cancellation or a failure after start.
+ * A reusable set of spread worker threads. Runs are served one after another in call order; the
+ * workers start with the first run (or `start`), are restarted when one has died, and never keep the
+ * process alive while idle. Cancelling a run rejects it at once; a worker busy with a chunk of it
+ * finishes that chunk (at most `chunk` trials) and its answer is dropped.
  */
-function runOnWorkers(jobs: SpreadJob[], data: SpreadWorkerData, threads: number, total: number, o: PoolOptions): Promise<Outcome | null> {
-  return new Promise((resolve, reject) => {
-    const out: Outcome = { blocks: [], worst: null };
-    const workers: Worker[] = [];
-    let next = 0;
-    let pending = jobs.length;
-    let done = 0;
-    let started = false;
-    let settled = false;
-    const finish = (fn: () => void) => {
-      if (settled) return;
-      settled = true;
-      o.signal?.removeEventListener('abort', onAbort);
-      for (const w of workers) void w.terminate();
-      fn();
-    };
-    const onAbort = () => finish(() => reject(abortError()));
-    if (o.signal?.aborted) return onAbort();
-    o.signal?.addEventListener('abort', onAbort);
-    const feed = (w: Worker) => {
-      if (next < jobs.length) w.postMessage(jobs[next++]);
-    };
-    const onReply = (w: Worker, reply: SpreadReply) => {
-      started = true;
-      if (reply.kind === 'failed') return finish(() => reject(new Error(reply.message)));
-      if (reply.kind === 'worst') out.worst = reply.worst;
-      else {
-        out.blocks.push(reply.block);
-        done += reply.block.to - reply.block.from;
-        o.onProgress?.(done, total);
-      }
-      pending--;
-      if (pending === 0) return finish(() => resolve(out));
-      feed(w);
-    };
-    const onError = (e: Error) => finish(() => (started ? reject(e) : resolve(null)));
-    try {
-      for (let i = 0; i < threads; i++) {
-        const w = new Worker(o.workerUrl ?? defaultWorkerUrl(), { workerData: data });
-        workers.push(w);
-        w.on('message', (reply: SpreadReply) => onReply(w, reply));
-        w.on('error', onError);
-        w.on('exit', (code) => {
-          if (code !== 0) onError(new Error(`spread worker stopped with exit code ${code}`));
-        });
-        feed(w);
-      }
-    } catch {
-      finish(() => resolve(null));
-    }
-  });
+export class SpreadPool {
+  private readonly workers: WorkerSet | null;
+  private queue: Promise<void> = Promise.resolve();
+  private isClosed = false;
+
+  constructor(options: SpreadPoolOptions = {}) {
+    const threads = Math.max(0, Math.floor(options.threads ?? availableParallelism()));
+    this.workers = threads > 0 ? new WorkerSet(threads, options.workerUrl ?? defaultWorkerUrl()) : null;
+  }
+
+  /** Worker threads alive now (started or starting). */
+  get liveWorkers(): number {
+    return this.workers?.live ?? 0;
+  }
+
+  /** Starts the workers ahead of the first run; resolves with how many are ready (0: runs stay in this thread). */
+  start(): Promise<number> {
+    if (this.isClosed) return Promise.reject(closedError());
+    return this.workers?.start() ?? Promise.resolve(0);
+  }
+
+  /** Runs worst case and Monte Carlo for `design`; waits for earlier runs of this pool first. */
+  run(design: Design, options: SpreadRunOptions & RunControl = {}): Promise<ParallelSpread> {
+    const before = this.queue;
+    let release = () => {};
+    this.queue = new Promise<void>((resolve) => (release = resolve));
+    return new Promise<ParallelSpread>((resolve, reject) => {
+      const signal = options.signal;
+      // A run cancelled while it waits for its turn rejects at once and is skipped.
+      const onAbort = () => reject(abortError());
+      signal?.addEventListener('abort', onAbort, { once: true });
+      void before.then(async () => {
+        signal?.removeEventListener('abort', onAbort);
+        try {
+          if (signal?.aborted) throw abortError();
+          resolve(await this.runNow(design, options));
+        } catch (e) {
+          reject(e);
+        } finally {
+          release();
+        }
+      });
+    });
+  }
+
+  /** Cancels the current run (it rejects) and ends every worker; later runs reject. */
+  async close(): Promise<void> {
+    this.isClosed = true;
+    await this.workers?.close(closedError());
+  }
+
+  private async runNow(design: Design, o: SpreadRunOptions & RunControl): Promise<ParallelSpread> {
+    if (this.isClosed) throw closedError();
+    // Workers boot while this thread builds the model.
+    const starting = this.start();
+    starting.catch(() => {});
+    const model = buildSpreadModel(design, o);
+    const seed = o.seed ?? 1;
+    const trials = o.trials ?? DEFAULT_TRIALS;
+    const workers = this.workers;
+    const jobs = spreadJobs(workers?.nextModel() ?? 0, trials, seed, o.chunk ?? DEFAULT_CHUNK, o.worstCase !== false);
+    const ready = await starting;
+    if (o.signal?.aborted) throw abortError();
+    let outcome: Outcome;
+    let used = 0;
+    if (workers && ready > 0) {
+      const message = { kind: 'model' as const, model: jobs[0]?.model ?? 0, design, options: pickModelOptions(o) };
+      ({ outcome, used } = await workers.run(message, jobs, trials, o));
+    } else outcome = await runHere(jobs, model, trials, o);
+    const report = summarize(model, joinBlocks(outcome.blocks, model.channels.length), seed, outcome.worst, o);
+    return { report, threads: used };
+  }
+}
+
+/**
+ * Runs worst case and Monte Carlo for `design` on a one-off pool (workers started for this run and
+ * ended after it), as the batch command does. `threads` is capped at the number of jobs.
+ */
+export async function runSpreadParallel(design: Design, options: SpreadRunOptions & PoolOptions = {}): Promise<ParallelSpread> {
+  const jobCount = spreadJobs(0, options.trials ?? DEFAULT_TRIALS, 1, options.chunk ?? DEFAULT_CHUNK, options.worstCase !== false).length;
+  const threads = Math.min(Math.floor(options.threads ?? availableParallelism()), jobCount);
+  const pool = new SpreadPool({ threads, workerUrl: options.workerUrl });
+  try {
+    return await pool.run(design, options);
+  } finally {
+    await pool.close();
+  }
 }

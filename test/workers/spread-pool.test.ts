@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { runSpread } from '../../src/engine/spread';
-import { runSpreadParallel } from '../../src/workers/spread-pool';
-import { fourStepDesign } from '../helpers/designs';
+import { runSpreadParallel, SpreadPool } from '../../src/workers/spread-pool';
+import { eightStepDesign, fourStepDesign } from '../helpers/designs';
 import { smallFeedbackDesign } from '../helpers/spread-designs';
 import { buildSpreadWorker } from '../helpers/spread-worker';
 
@@ -51,5 +51,84 @@ describe('spread worker pool', () => {
     const controller = new AbortController();
     const run = runSpreadParallel(design(), { trials: 100_000, threads: 0, chunk: 50, signal: controller.signal, onProgress: () => controller.abort() });
     await expect(run).rejects.toMatchObject({ name: 'AbortError' });
+  });
+});
+
+// Reference for every check below: the single-thread, in-process engine (`runSpread`), which the
+// parallel runs must match exactly (each trial's random stream depends on (seed, trial) only).
+describe('reusable spread pool', () => {
+  test('two runs on different designs in one pool give the same reports as the engine in-process', async () => {
+    const pool = new SpreadPool({ threads: 2, workerUrl: await buildSpreadWorker() });
+    try {
+      const first = await pool.run(design(), { trials: 300, seed: 5, chunk: 40 });
+      const second = await pool.run(eightStepDesign(), { trials: 200, seed: 6, chunk: 40 });
+      expect(first.threads).toBe(2);
+      expect(first.report).toEqual(runSpread(design(), { trials: 300, seed: 5 }));
+      expect(second.report).toEqual(runSpread(eightStepDesign(), { trials: 200, seed: 6 }));
+    } finally {
+      await pool.close();
+    }
+  });
+
+  test('a cancelled run rejects at once and the next run on the same pool is complete and exact', async () => {
+    const pool = new SpreadPool({ threads: 2, workerUrl: await buildSpreadWorker() });
+    try {
+      const controller = new AbortController();
+      const cancelled = pool.run(design(), { trials: 100_000, chunk: 50, signal: controller.signal, onProgress: () => controller.abort() });
+      await expect(cancelled).rejects.toMatchObject({ name: 'AbortError' });
+      const after = await pool.run(design(), { trials: 250, seed: 7, chunk: 50 });
+      expect(after.report).toEqual(runSpread(design(), { trials: 250, seed: 7 }));
+      expect(pool.liveWorkers).toBe(2);
+    } finally {
+      await pool.close();
+    }
+  });
+
+  test('runs queued behind each other each get their own numbers', async () => {
+    const pool = new SpreadPool({ threads: 2, workerUrl: await buildSpreadWorker() });
+    try {
+      const [a, b] = await Promise.all([pool.run(design(), { trials: 150, seed: 8, chunk: 30 }), pool.run(design(), { trials: 150, seed: 9, chunk: 30 })]);
+      expect(a.report).toEqual(runSpread(design(), { trials: 150, seed: 8 }));
+      expect(b.report).toEqual(runSpread(design(), { trials: 150, seed: 9 }));
+    } finally {
+      await pool.close();
+    }
+  });
+
+  test('pools of one and two threads give the same report', async () => {
+    const workerUrl = await buildSpreadWorker();
+    const reports = [];
+    for (const threads of [1, 2]) {
+      const pool = new SpreadPool({ threads, workerUrl });
+      try {
+        reports.push((await pool.run(eightStepDesign(), { trials: 120, seed: 10, chunk: 25 })).report);
+      } finally {
+        await pool.close();
+      }
+    }
+    expect(reports[1]).toEqual(reports[0]);
+  });
+
+  test('closing ends every worker, and a run after closing rejects with a message', async () => {
+    const pool = new SpreadPool({ threads: 2, workerUrl: await buildSpreadWorker() });
+    expect(await pool.start()).toBe(2);
+    expect(pool.liveWorkers).toBe(2);
+    await pool.close();
+    expect(pool.liveWorkers).toBe(0);
+    await expect(pool.run(design(), { trials: 10 })).rejects.toThrow(/closed/);
+  });
+
+  test('without a worker script the pool runs in this thread, run after run', async () => {
+    const pool = new SpreadPool({ threads: 2, workerUrl: new URL('file:///nonexistent/spread-worker.mjs') });
+    try {
+      for (const seed of [11, 12]) {
+        const run = await pool.run(design(), { trials: 100, seed });
+        expect(run.threads).toBe(0);
+        expect(run.report).toEqual(runSpread(design(), { trials: 100, seed }));
+      }
+      expect(pool.liveWorkers).toBe(0);
+    } finally {
+      await pool.close();
+    }
   });
 });
