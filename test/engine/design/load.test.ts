@@ -1,6 +1,10 @@
-import { describe, expect, test } from 'vitest';
+import { beforeAll, describe, expect, test } from 'vitest';
 import { formatProblems, parseDesign, type Problem } from '../../../src/engine/design/load';
+import { loadUnitReader } from '../../../src/engine/values';
 import { demoCopy, lcg } from '../../helpers/design-fixtures';
+
+// Wrong-unit messages ("a current, not ...") come from the unit reader.
+beforeAll(() => loadUnitReader());
 
 /** The problems of a file that must fail to load. */
 function problemsOf(json: unknown): Problem[] {
