@@ -1,12 +1,13 @@
 /**
  * Optional capabilities wired into the screen: the planner, the spread analysis (worker threads,
- * cancellable) and export (the same texts as `tapline export`, written atomically).
+ * cancellable) and export (the same texts as `tapline export`, written atomically). Spread runs share
+ * one worker pool for the screen's lifetime, so later runs start on warm workers.
  */
 import { EXPORT_SEED, EXPORT_TRIALS, exportNeedsSpread, exportText } from '../engine/export/export-text';
 import { plan } from '../engine/planner';
 import { writeFileAtomic } from '../store/files';
 import type { QuantitySpread, SpreadReport } from '../engine/spread';
-import { runSpreadParallel } from '../workers/spread-pool';
+import { SpreadPool } from '../workers/spread-pool';
 import type { PlanOutcome, Services } from './services';
 import type { Range, SpreadSummary } from './state/app-state';
 import type { Design } from '../engine/design/types';
@@ -37,18 +38,27 @@ export function planDesign(design: Design): PlanOutcome {
   return { ok: false, message: problems || 'the targets cannot be planned' };
 }
 
-/** The capability services available in this build. */
-export function capabilities(): Pick<Services, 'plan' | 'spread' | 'exportDesign'> {
+/** The capability services of this build, and `close` to end their worker threads when the screen ends. */
+export type Capabilities = Pick<Services, 'plan' | 'spread' | 'exportDesign'> & { close(): Promise<void> };
+
+/** The capability services available in this build; the spread pool starts with the first run. */
+export function capabilities(): Capabilities {
+  let pool: SpreadPool | null = null;
+  let running: AbortController | null = null;
+  const spreadPool = () => (pool ??= new SpreadPool());
   return {
     plan: planDesign,
     exportDesign: async (path, design, format, spread) => {
       // Without a spread at hand the report's run goes to the worker threads, so the screen stays live.
-      const report = spread ?? (exportNeedsSpread(format) ? (await runSpreadParallel(design, { trials: EXPORT_TRIALS, seed: EXPORT_SEED })).report : null);
+      const report = spread ?? (exportNeedsSpread(format) ? (await spreadPool().run(design, { trials: EXPORT_TRIALS, seed: EXPORT_SEED })).report : null);
       await writeFileAtomic(path, exportText({ design, format, spread: report }));
     },
     spread: (design, onProgress) => {
+      // A newer run replaces the one in progress (whose result the screen no longer wants): the pool runs one at a time.
+      running?.abort();
       const abort = new AbortController();
-      const result = runSpreadParallel(design, { trials: SCREEN_TRIALS, seed: EXPORT_SEED, signal: abort.signal, onProgress }).then(
+      running = abort;
+      const result = spreadPool().run(design, { trials: SCREEN_TRIALS, seed: EXPORT_SEED, signal: abort.signal, onProgress }).then(
         (out) => summarizeSpread(out.report),
         (e: Error) => {
           if (e.name === 'AbortError') return null;
@@ -56,6 +66,10 @@ export function capabilities(): Pick<Services, 'plan' | 'spread' | 'exportDesign
         },
       );
       return { result, cancel: () => abort.abort() };
+    },
+    close: async () => {
+      running?.abort();
+      await pool?.close();
     },
   };
 }

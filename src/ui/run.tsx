@@ -62,6 +62,7 @@ export async function openTui(file: string | undefined, io: CliIo): Promise<numb
   if (draft && !sameDesign(draft.design, start.design)) initial.question = { kind: 'draft', draft };
   else if (draft) drafts.clear(start.path);
 
+  const { close: closeCapabilities, ...capable } = capabilities();
   const services: Services = {
     settings,
     drafts,
@@ -71,7 +72,7 @@ export async function openTui(file: string | undefined, io: CliIo): Promise<numb
     writeDesign: (path, design) => writeFileAtomic(path, `${JSON.stringify(designToFile(design), null, 2)}\n`),
     fileExists,
     presets: async () => (await listPresets()).presets,
-    ...capabilities(),
+    ...capable,
   };
 
   let code: number = EXIT.ok;
@@ -116,6 +117,7 @@ export async function openTui(file: string | undefined, io: CliIo): Promise<numb
   } finally {
     for (const [sig, h] of handlers) process.off(sig, h);
     restore();
+    await closeCapabilities();
   }
   return code;
 }
