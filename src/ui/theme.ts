@@ -47,7 +47,7 @@ export interface Glyphs {
 }
 
 const UNICODE: Glyphs = {
-  rule: '─', focus: '▶', top: '┬', wire: '│', tap: '├', bottom: '┴', up: '↑', down: '↓',
+  rule: '─', focus: '▸', top: '┬', wire: '│', tap: '├', bottom: '┴', up: '↑', down: '↓',
   ledOn: '●', ledFaint: '◍', ledOff: '○', cellBoth: '█', cellUp: '▀', cellDown: '▄', cellOff: ' ', cellChatter: '!',
   cursor: '▲', more: '…', ohm: 'Ω',
 };

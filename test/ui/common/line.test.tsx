@@ -22,7 +22,7 @@ function merged(rows: Seg[][], width: number): string {
 describe('Lines', () => {
   it('draws styled, plain, empty and over-long rows exactly as a column of Line does', () => {
     const rows: Seg[][] = [
-      [{ text: '▶ Title', style: { bold: true } }, { text: ' note ', style: { dimColor: true } }, { text: '──────────' }],
+      [{ text: '▸ Title', style: { bold: true } }, { text: ' note ', style: { dimColor: true } }, { text: '──────────' }],
       [{ text: '' }],
       [{ text: '│ RS1 ' }, { text: '3k16', style: { inverse: true } }, { text: ' and a tail far wider than the pane is' }],
       [{ text: 'S1 ', style: {} }, { text: '▄███', style: { color: 'green' } }],

@@ -1,0 +1,93 @@
+/**
+ * Two speed-ups for the terminal screen, applied to dependencies while bundling (esbuild plugin).
+ * Each redraw of the screen went mostly to text measuring inside the terminal renderer:
+ *
+ * 1. string-width: text made only of characters that always take one cell (printable ASCII,
+ *    Latin-1, Greek, box drawing, arrows, maths signs), once its colour and style codes (SGR escape
+ *    sequences, which take no cells) are dropped, is `length` cells wide; the library's full
+ *    path (grapheme segmentation, emoji and East Asian width tables) runs only for other text.
+ *    test/build/ink-speedups.test.ts checks every one of these characters against both installed
+ *    versions of the library.
+ * 2. Ink's Output keeps its per-frame caches (styled characters and widths of each line) for the
+ *    next frame instead of dropping them: a keystroke changes a few lines of the screen, so most
+ *    lines are read from the cache. The shared cache is renewed when it grows past CACHE_LIMIT.
+ *
+ * Each patch names the text it expects; a dependency update that changes it stops the build with a
+ * message, so a patch can never silently fall away.
+ */
+import { readFile } from 'node:fs/promises';
+
+/** Characters that take exactly one terminal cell (see the test for the check). */
+export const ONE_CELL_CLASS =
+  '\\u0020-\\u007E\\u00A0-\\u00A8\\u00AA-\\u00AC\\u00AF-\\u00FF\\u0370-\\u03FF\\u2010-\\u2027\\u2030-\\u203B' +
+  '\\u203D-\\u2048\\u204A-\\u205E\\u2070-\\u209F\\u20A0-\\u20BF\\u2100-\\u2121\\u2123-\\u2138\\u213A-\\u214F' +
+  '\\u2190-\\u2193\\u219A-\\u21A8\\u21AB-\\u21FF\\u2200-\\u22FF\\u2500-\\u259F\\u25A0-\\u25A9\\u25AC-\\u25B5' +
+  '\\u25B7-\\u25BF\\u25C1-\\u25FA';
+
+/** Entries per cache map before the shared Output cache is renewed. */
+export const CACHE_LIMIT = 4000;
+
+/** The patches: which files, and how each is changed (null when the expected text is missing). */
+export const PATCHES = [
+  {
+    name: 'one-cell fast path in string-width',
+    file: /[\\/]node_modules[\\/](?:.*[\\/])?string-width[\\/]index\.js$/,
+    apply(text) {
+      const anchor = 'export default function stringWidth(';
+      if (!text.includes(anchor)) return null;
+      return `${text.replace(anchor, 'function fullStringWidth(')}
+const oneCell = /^[${ONE_CELL_CLASS}]*$/;
+const sgr = /\u001B\[[0-9;]*m/g;
+export default function stringWidth(text, options) {
+  if (typeof text === 'string' && (!options || (options.ambiguousIsNarrow !== false && !options.countAnsiEscapeCodes))) {
+    const bare = text.includes('\u001B') ? text.replace(sgr, '') : text;
+    if (oneCell.test(bare)) return bare.length;
+  }
+  return fullStringWidth(text, options);
+}
+`;
+    },
+  },
+  {
+    name: 'Output caches kept across frames in ink',
+    file: /[\\/]node_modules[\\/]ink[\\/]build[\\/]output\.js$/,
+    apply(text) {
+      const anchor = '    caches = new OutputCaches();';
+      if (!text.includes(anchor) || !text.includes('class OutputCaches {')) return null;
+      return `${text.replace(anchor, '    caches = sharedCaches();')}
+let shared = null;
+function sharedCaches() {
+    if (!shared || shared.styledChars.size > ${CACHE_LIMIT} || shared.widths.size > ${CACHE_LIMIT} || shared.blockWidths.size > ${CACHE_LIMIT}) {
+        shared = new OutputCaches();
+    }
+    return shared;
+}
+`;
+    },
+  },
+];
+
+/** The esbuild plugin applying PATCHES; the build fails when one cannot be applied or never matched. */
+export function inkSpeedups() {
+  return {
+    name: 'tapline-ink-speedups',
+    setup(build) {
+      const applied = new Set();
+      for (const patch of PATCHES) {
+        build.onLoad({ filter: patch.file }, async (args) => {
+          const out = patch.apply(await readFile(args.path, 'utf8'));
+          if (out === null) {
+            return { errors: [{ text: `${patch.name}: ${args.path} no longer has the expected text; update src/build/ink-speedups.mjs for this version` }] };
+          }
+          applied.add(patch.name);
+          return { contents: out, loader: 'js' };
+        });
+      }
+      build.onEnd((result) => {
+        if (result.errors.length) return;
+        const missing = PATCHES.filter((p) => !applied.has(p.name)).map((p) => p.name);
+        if (missing.length) result.errors.push({ text: `patch never applied (file moved?): ${missing.join(', ')}; update src/build/ink-speedups.mjs` });
+      });
+    },
+  };
+}
