@@ -33,39 +33,90 @@ export function percentileSorted(sorted: ArrayLike<number>, p: number): number {
   return sorted[lo] + (h - lo) * (sorted[hi] - sorted[lo]);
 }
 
+/**
+ * The k-th smallest value of `a` (0-based), found by partial partitioning (Hoare's selection,
+ * median-of-three pivot); reorders `a`. Linear on average, unlike a full sort.
+ */
+function select(a: Float64Array, k: number): number {
+  let l = 0;
+  let m = a.length - 1;
+  while (l < m) {
+    const p = a[l];
+    const q = a[(l + m) >> 1];
+    const r = a[m];
+    const x = p < q ? (q < r ? q : p < r ? r : p) : p < r ? p : q < r ? r : q;
+    let i = l;
+    let j = m;
+    do {
+      while (a[i] < x) i++;
+      while (x < a[j]) j--;
+      if (i <= j) {
+        const t = a[i];
+        a[i] = a[j];
+        a[j] = t;
+        i++;
+        j--;
+      }
+    } while (i <= j);
+    if (j < k) l = i;
+    if (k < i) m = j;
+  }
+  return a[k];
+}
+
+/** `percentileSorted` of `a` as if sorted, by selection of the two order statistics it needs; reorders `a`. */
+function percentileBySelection(a: Float64Array, p: number): number {
+  const n = a.length;
+  const h = (n - 1) * p;
+  const lo = Math.floor(h);
+  const below = select(a, lo);
+  // After selecting rank lo every later element is >= it; the next order statistic is their minimum.
+  let above = lo + 1 < n ? Infinity : below;
+  for (let i = lo + 1; i < n; i++) if (a[i] < above) above = a[i];
+  return below + (h - lo) * (above - below);
+}
+
 /** Statistics of `values` (any order); null for an empty sample. */
 export function sampleStats(values: Float64Array): SampleStats | null {
   const n = values.length;
   if (n === 0) return null;
-  const sorted = Float64Array.from(values).sort();
   let sum = 0;
-  for (let i = 0; i < n; i++) sum += values[i];
+  let min = Infinity;
+  let max = -Infinity;
+  for (let i = 0; i < n; i++) {
+    const v = values[i];
+    sum += v;
+    min = Math.min(min, v);
+    max = Math.max(max, v);
+  }
   const mean = sum / n;
   let ss = 0;
   for (let i = 0; i < n; i++) ss += (values[i] - mean) ** 2;
+  const work = Float64Array.from(values);
   return {
     count: n,
-    min: sorted[0],
-    max: sorted[n - 1],
+    min,
+    max,
     mean,
     std: n > 1 ? Math.sqrt(ss / (n - 1)) : 0,
-    p00135: percentileSorted(sorted, 0.00135),
-    p99865: percentileSorted(sorted, 0.99865),
+    p00135: percentileBySelection(work, 0.00135),
+    p99865: percentileBySelection(work, 0.99865),
   };
 }
 
 /** Histogram of `values` with `bins` equal bins spanning their min..max. */
 export function histogram(values: Float64Array, bins: number): Histogram {
+  const n = values.length;
+  if (n === 0) return { from: 0, to: 0, counts: [] };
   let from = Infinity;
   let to = -Infinity;
-  for (const v of values) {
-    from = Math.min(from, v);
-    to = Math.max(to, v);
+  for (let i = 0; i < n; i++) {
+    from = Math.min(from, values[i]);
+    to = Math.max(to, values[i]);
   }
-  if (values.length === 0) return { from: 0, to: 0, counts: [] };
   const count = to > from ? Math.max(1, Math.floor(bins)) : 1;
   const counts = new Array<number>(count).fill(0);
   const width = (to - from) / count;
-  for (const v of values) counts[width > 0 ? Math.min(count - 1, Math.floor((v - from) / width)) : 0]++;
+  for (let i = 0; i < n; i++) counts[width > 0 ? Math.min(count - 1, Math.floor((values[i] - from) / width)) : 0]++;
   return { from, to, counts };
 }

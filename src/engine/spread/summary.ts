@@ -81,31 +81,44 @@ export function summarize(model: SpreadModel, block: TrialBlock, seed: number, w
   sweepTrips(design, model.net, nomRise, nomFall);
   const allowance = options.allowance ?? design.targets?.allowance ?? null;
   const bins = options.bins ?? 20;
-  const column = (k: number, f: (t: number) => number) => Float64Array.from({ length: trials }, (_, t) => f(t * n + k));
+  const column = (source: Float64Array, k: number) => {
+    const out = new Float64Array(trials);
+    for (let t = 0; t < trials; t++) out[t] = source[t * n + k];
+    return out;
+  };
   const allOk = new Uint8Array(trials).fill(1);
   const spread = (values: Float64Array, nominal: number, bound: Bound | null, inYield: boolean): QuantitySpread => {
-    const present = values.filter((v) => !Number.isNaN(v));
+    const present = new Float64Array(trials);
+    let count = 0;
     let within = 0;
-    values.forEach((v, t) => {
+    for (let t = 0; t < trials; t++) {
+      const v = values[t];
+      if (!Number.isNaN(v)) present[count++] = v;
       const ok = allowance !== null && !Number.isNaN(v) && !Number.isNaN(nominal) && Math.abs(v - nominal) <= allowance;
       if (ok) within++;
       else if (inYield) allOk[t] = 0;
-    });
+    }
+    const sample = present.subarray(0, count);
     return {
       nominal: Number.isNaN(nominal) ? null : nominal,
-      stats: sampleStats(present),
-      missing: trials - present.length,
-      histogram: histogram(present, bins),
+      stats: sampleStats(sample),
+      missing: trials - count,
+      histogram: histogram(sample, bins),
       bound,
       yield: allowance === null || trials === 0 ? null : within / trials,
     };
   };
   const channels: ChannelSpread[] = model.channels.map((id, k) => {
-    const rise = column(k, (i) => block.rising[i]);
-    const fall = column(k, (i) => block.falling[i]);
-    const hyst = rise.map((r, t) => r - fall[t]);
+    const rise = column(block.rising, k);
+    const fall = column(block.falling, k);
+    const hyst = new Float64Array(trials);
+    let below = 0;
+    for (let t = 0; t < trials; t++) {
+      const h = rise[t] - fall[t];
+      hyst[t] = h;
+      if (Number.isNaN(h) || h < design.quantity.noise) below++;
+    }
     const wc = worst?.channels[k] ?? null;
-    const below = hyst.reduce((acc, h) => acc + (Number.isNaN(h) || h < design.quantity.noise ? 1 : 0), 0);
     return {
       id,
       label: design.channels.find((c) => c.id === id)?.label ?? id,
