@@ -1,5 +1,5 @@
 /**
- * Two speed-ups for the terminal screen, applied to dependencies while bundling (esbuild plugin).
+ * Speed-ups for the terminal screen, applied to dependencies while bundling (an esbuild plugin).
  * Each redraw of the screen went mostly to text measuring inside the terminal renderer:
  *
  * 1. string-width: text made only of characters that always take one cell (printable ASCII,
@@ -8,9 +8,13 @@
  *    path (grapheme segmentation, emoji and East Asian width tables) runs only for other text.
  *    test/build/ink-speedups.test.ts checks every one of these characters against both installed
  *    versions of the library.
- * 2. Ink's Output keeps its per-frame caches (styled characters and widths of each line) for the
+ * 2. The styled-text tokenizer under Ink's Output: the same kind of text is split into characters
+ *    directly instead of by grapheme segmentation (each such character is a grapheme of its own).
+ * 3. Ink's Output keeps its per-frame caches (styled characters and widths of each line) for the
  *    next frame instead of dropping them: a keystroke changes a few lines of the screen, so most
  *    lines are read from the cache. The shared cache is renewed when it grows past CACHE_LIMIT.
+ * 4. The grapheme segmenters these modules and slice-ansi create at load time are made on first
+ *    use: the first one costs about 12 ms, and with 1 and 2 a frame of one-cell text needs none.
  *
  * Each patch names the text it expects; a dependency update that changes it stops the build with a
  * message, so a patch can never silently fall away.
@@ -27,21 +31,45 @@ export const ONE_CELL_CLASS =
 /** Entries per cache map before the shared Output cache is renewed. */
 export const CACHE_LIMIT = 4000;
 
+/** Replaces each [anchor, replacement] once in `text`; null when an anchor is missing. */
+function edit(text, pairs) {
+  let out = text;
+  for (const [anchor, replacement] of pairs) {
+    if (!out.includes(anchor)) return null;
+    out = out.replace(anchor, () => replacement);
+  }
+  return out;
+}
+
+/**
+ * A module-level `const NAME = new Intl.Segmenter(ARGS);` made lazy: the first segmenter of a
+ * process costs about 12 ms (the break rules load), paid at start-up by four dependencies even when
+ * no text needs it.
+ */
+function lazySegmenter(name, args) {
+  return [`const ${name} = new Intl.Segmenter(${args});`, `let ${name}Made = null;
+const ${name} = { segment: (text) => (${name}Made ??= new Intl.Segmenter(${args})).segment(text) };`];
+}
+
+/** Source of a function `oneCellText(text)`: true when `text` less its SGR codes is all one-cell characters. */
+const ONE_CELL_TEXT = `const oneCell = /^[${ONE_CELL_CLASS}]*$/;
+const sgr = /\\u001B\\[[0-9;]*m/g;
+function oneCellText(text) {
+  return oneCell.test(text.includes('\\u001B') ? text.replace(sgr, '') : text);
+}`;
+
 /** The patches: which files, and how each is changed (null when the expected text is missing). */
 export const PATCHES = [
   {
     name: 'one-cell fast path in string-width',
     file: /[\\/]node_modules[\\/](?:.*[\\/])?string-width[\\/]index\.js$/,
     apply(text) {
-      const anchor = 'export default function stringWidth(';
-      if (!text.includes(anchor)) return null;
-      return `${text.replace(anchor, 'function fullStringWidth(')}
-const oneCell = /^[${ONE_CELL_CLASS}]*$/;
-const sgr = /\u001B\[[0-9;]*m/g;
+      const out = edit(text, [lazySegmenter('segmenter', ''), ['export default function stringWidth(', 'function fullStringWidth(']]);
+      return out && `${out}
+${ONE_CELL_TEXT}
 export default function stringWidth(text, options) {
-  if (typeof text === 'string' && (!options || (options.ambiguousIsNarrow !== false && !options.countAnsiEscapeCodes))) {
-    const bare = text.includes('\u001B') ? text.replace(sgr, '') : text;
-    if (oneCell.test(bare)) return bare.length;
+  if (typeof text === 'string' && (!options || (options.ambiguousIsNarrow !== false && !options.countAnsiEscapeCodes)) && oneCellText(text)) {
+    return text.includes('\\u001B') ? text.replace(sgr, '').length : text.length;
   }
   return fullStringWidth(text, options);
 }
@@ -49,12 +77,37 @@ export default function stringWidth(text, options) {
     },
   },
   {
+    // Every character of one-cell text (SGR codes included) is a grapheme of its own.
+    name: 'one-cell fast path in the styled-text tokenizer',
+    file: /[\\/]node_modules[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]tokenize\.js$/,
+    apply(text) {
+      const out = edit(text, [
+        lazySegmenter('segmenter', 'undefined, { granularity: "grapheme" }'),
+        ['for (const { segment, index } of segmenter.segment(str)) {', 'for (const { segment, index } of graphemes(str)) {'],
+      ]);
+      return out && `${out}
+${ONE_CELL_TEXT}
+function graphemes(str) {
+  if (!oneCellText(str)) return segmenter.segment(str);
+  const out = new Array(str.length);
+  for (let index = 0; index < str.length; index++) out[index] = { segment: str[index], index };
+  return out;
+}
+`;
+    },
+  },
+  {
+    name: 'lazy segmenter in slice-ansi',
+    file: /[\\/]node_modules[\\/]slice-ansi[\\/]tokenize-ansi\.js$/,
+    apply: (text) => edit(text, [lazySegmenter('GRAPHEME_SEGMENTER', "undefined, {granularity: 'grapheme'}")]),
+  },
+  {
     name: 'Output caches kept across frames in ink',
     file: /[\\/]node_modules[\\/]ink[\\/]build[\\/]output\.js$/,
     apply(text) {
-      const anchor = '    caches = new OutputCaches();';
-      if (!text.includes(anchor) || !text.includes('class OutputCaches {')) return null;
-      return `${text.replace(anchor, '    caches = sharedCaches();')}
+      if (!text.includes('class OutputCaches {')) return null;
+      const out = edit(text, [['    caches = new OutputCaches();', '    caches = sharedCaches();']]);
+      return out && `${out}
 let shared = null;
 function sharedCaches() {
     if (!shared || shared.styledChars.size > ${CACHE_LIMIT} || shared.widths.size > ${CACHE_LIMIT} || shared.blockWidths.size > ${CACHE_LIMIT}) {

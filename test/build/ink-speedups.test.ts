@@ -1,4 +1,4 @@
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
@@ -7,17 +7,42 @@ import { describe, expect, test } from 'vitest';
 import { inkSpeedups, ONE_CELL_CLASS, PATCHES } from '../../src/build/ink-speedups.mjs';
 
 type Width = (text: string, options?: object) => number;
+type Tokenize = (text: string, endChar?: number) => unknown[];
+type Slice = (text: string, start: number, end?: number) => string;
 
 const here = createRequire(import.meta.url);
-/** Every installed copy of string-width that the bundle uses (Ink's own and the one under wrap-ansi). */
-const widthFiles = [
-  here.resolve('string-width'),
-  join(dirname(here.resolve('wrap-ansi')), 'node_modules', 'string-width', 'index.js'),
-];
-const inkOutput = join(dirname(here.resolve('ink')), 'output.js');
+const inkDir = dirname(dirname(here.resolve('ink')));
 
-async function widthOf(file: string): Promise<Width> {
-  return (await import(pathToFileURL(file).href)).default as Width;
+/** A file of package `name` as Ink finds it: under Ink's own node_modules first, else hoisted. */
+function inkDependency(name: string, file: string): string {
+  const own = join(inkDir, 'node_modules', name, file);
+  return existsSync(own) ? own : join(dirname(inkDir), name, file);
+}
+
+/** Every installed copy of string-width that the bundle uses (Ink's own and the one under wrap-ansi). */
+const widthFiles = [here.resolve('string-width'), join(dirname(here.resolve('wrap-ansi')), 'node_modules', 'string-width', 'index.js')];
+const tokenizeIndex = inkDependency('@alcalzone/ansi-tokenize', 'build/index.js');
+const sliceIndex = inkDependency('slice-ansi', 'index.js');
+/** The installed file each patch is written for. */
+const patchedFiles = [...widthFiles, join(dirname(tokenizeIndex), 'tokenize.js'), join(dirname(sliceIndex), 'tokenize-ansi.js'), join(dirname(here.resolve('ink')), 'output.js')];
+
+/** Screen-like samples: styled text (SGR codes), wide, emoji, combining and control characters, a link. */
+const SAMPLES = [
+  '', 'abc', 'RS1 ─ 3k09 ├ 12.68 V', '\u001B[1m\u001B[36mTaps\u001B[39m\u001B[22m ───', '\u001B[7m▸ Channels\u001B[27m',
+  '\u001B[38;5;208mS1\u001B[39m ●S2 ○S3', '漢字 and ASCII', '\u001B[1m漢\u001B[22m', '😀 smile', 'e\u0301', 'tab\there', 'cr\r\nlf',
+  '\u001B]8;;https://example.org\u0007link\u001B]8;;\u0007', '©↔▶', 'Ω µ ± ° ≥ ≤ █ ▀ ▄',
+];
+
+async function load<T>(file: string, name = 'default'): Promise<T> {
+  return (await import(pathToFileURL(file).href))[name] as T;
+}
+
+/** `file` bundled on its own with the build's patches applied, as the screen's bundle has it. */
+async function patched<T>(file: string, name = 'default'): Promise<T> {
+  const esbuild = await import('esbuild');
+  const outfile = join(mkdtempSync(join(tmpdir(), 'tapline-patched-')), 'module.mjs');
+  await esbuild.build({ entryPoints: [file], bundle: true, platform: 'node', format: 'esm', outfile, logLevel: 'silent', plugins: [inkSpeedups() as never] });
+  return load<T>(outfile, name);
 }
 
 /** Every code point the one-cell class admits. */
@@ -28,56 +53,45 @@ function oneCellCodePoints(): number[] {
   return out;
 }
 
-describe('one-cell fast path', () => {
+describe('one-cell characters', () => {
   // Reference: the string-width library itself (npm), both installed versions, default options.
-  test.each(widthFiles)('every admitted character is one cell wide in %s', async (file) => {
-    const width = await widthOf(file);
-    const wrong = oneCellCodePoints().filter((c) => width(String.fromCodePoint(c)) !== 1);
-    expect(wrong.map((c) => c.toString(16))).toEqual([]);
+  test.each(widthFiles)('each is one cell wide in %s', async (file) => {
+    const width = await load<Width>(file);
+    expect(oneCellCodePoints().filter((c) => width(String.fromCodePoint(c)) !== 1).map((c) => c.toString(16))).toEqual([]);
   });
 
-  test.each(widthFiles)('lines of admitted characters measure their length in %s', async (file) => {
-    const width = await widthOf(file);
-    for (const line of ['RS1 ─ 3k09 ├ 12.68 V ↑ ↓ µA Ω ±2 % ° ≥ ≤ ▸ █ ░', '  ┬ │ ┴ ─────', 'plain ASCII']) {
-      expect(width(line)).toBe(line.length);
-    }
-  });
-
-  test('characters that may take two cells or none are left to the library', () => {
+  test('characters that may take two cells or none are not admitted', () => {
     const re = new RegExp(`^[${ONE_CELL_CLASS}]*$`, 'u');
-    // Wide CJK, emoji, a combining accent, an escape sequence, text-default emoji that some
-    // terminals draw wide (copyright sign, left-right arrow, play triangle).
-    for (const text of ['漢字', '😀', 'e\u0301', '\u001B[1mX\u001B[22m', '©', '↔', '▶']) expect(re.test(text)).toBe(false);
+    // Wide CJK, emoji, a combining accent, an escape, text-default emoji that some terminals draw
+    // wide (copyright sign, left-right arrow, play triangle).
+    for (const text of ['漢字', '😀', 'e\u0301', '\u001B', '©', '↔', '▶']) expect(re.test(text)).toBe(false);
   });
 });
 
-/** `file` bundled on its own with the build's patches applied, as the screen's bundle has it. */
-async function patchedWidthOf(file: string): Promise<Width> {
-  const esbuild = await import('esbuild');
-  const outfile = join(mkdtempSync(join(tmpdir(), 'tapline-width-')), 'width.mjs');
-  await esbuild.build({ entryPoints: [file], bundle: true, platform: 'node', format: 'esm', outfile, logLevel: 'silent', plugins: [inkSpeedups() as never] });
-  return (await import(pathToFileURL(outfile).href)).default as Width;
-}
-
-describe('patched string-width', () => {
-  // Reference: the unpatched library. Styled text (SGR codes), wide, emoji, combining and control
-  // characters, and both options that change the count.
-  const samples = [
-    '', 'abc', 'RS1 ─ 3k09 ├ 12.68 V', '\u001B[1m\u001B[36mTaps\u001B[39m\u001B[22m ───', '\u001B[7m▸ Channels\u001B[27m',
-    '漢字 and ASCII', '\u001B[1m漢\u001B[22m', '😀 smile', 'e\u0301', 'tab\there', '\u001B]8;;https://x\u0007link\u001B]8;;\u0007', '©↔▶', 'Ω µ ± °',
-  ];
-  test.each(widthFiles)('agrees with the library in %s', async (file) => {
-    const [real, patched] = [await widthOf(file), await patchedWidthOf(file)];
-    for (const text of samples) {
-      expect([text, patched(text)]).toEqual([text, real(text)]);
-      expect([text, patched(text, { ambiguousIsNarrow: false })]).toEqual([text, real(text, { ambiguousIsNarrow: false })]);
-      expect([text, patched(text, { countAnsiEscapeCodes: true })]).toEqual([text, real(text, { countAnsiEscapeCodes: true })]);
+describe('patched modules agree with the originals', () => {
+  test.each(widthFiles)('string-width in %s, with each option that changes the count', async (file) => {
+    const [real, fast] = [await load<Width>(file), await patched<Width>(file)];
+    for (const options of [undefined, { ambiguousIsNarrow: false }, { countAnsiEscapeCodes: true }]) {
+      for (const text of SAMPLES) expect([text, options, fast(text, options)]).toEqual([text, options, real(text, options)]);
     }
+  });
+
+  test('the styled-text tokenizer', async () => {
+    const [real, fast] = [await load<Tokenize>(tokenizeIndex, 'tokenize'), await patched<Tokenize>(tokenizeIndex, 'tokenize')];
+    for (const text of SAMPLES) {
+      expect([text, fast(text)]).toEqual([text, real(text)]);
+      expect([text, fast(text, 3)]).toEqual([text, real(text, 3)]);
+    }
+  });
+
+  test('slice-ansi', async () => {
+    const [real, fast] = [await load<Slice>(sliceIndex), await patched<Slice>(sliceIndex)];
+    for (const text of SAMPLES) expect([text, fast(text, 1, 6)]).toEqual([text, real(text, 1, 6)]);
   });
 });
 
 describe('patches', () => {
-  test.each([...widthFiles, inkOutput])('apply to the installed %s', (file) => {
+  test.each(patchedFiles)('apply to the installed %s', (file) => {
     const patch = PATCHES.find((p) => p.file.test(file));
     expect(patch).toBeDefined();
     expect(patch!.apply(readFileSync(file, 'utf8'))).not.toBeNull();
