@@ -10,17 +10,19 @@ import { type SpreadReport, summarize, type SummaryOptions } from './summary';
 import { worstCase, type WorstCaseOptions } from './worst-case';
 
 export { createRng, drawUnit, unitStandardDeviation, type DistributionKind, type Rng } from './distributions';
-export { buildSpreadModel, evaluateAt, sweepTrips, type SpreadModel, type TripSample } from './model';
+export { buildSpreadModel, evaluateAt, sweepAt, sweepTrips, type SpreadModel, type TripSample } from './model';
 export { joinBlocks, runTrials, trialUnits, type TrialBlock } from './monte-carlo';
 export {
   DEFAULT_DISTRIBUTIONS,
   DEFAULT_KNEE_SPREAD,
   parameterValue,
+  perturbInto,
   perturbNetwork,
   spreadParameters,
   type Parameter,
   type ParameterGroup,
   type SpreadOptions,
+  valueCopy,
 } from './perturb';
 export { summarize, type ChannelSpread, type OrderRisk, type QuantitySpread, type SpreadReport, type SummaryOptions } from './summary';
 export { worstCase, type Bound, type ChannelBounds, type WorstCase, type WorstCaseOptions } from './worst-case';

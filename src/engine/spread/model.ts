@@ -8,7 +8,7 @@ import { buildNetwork } from '../network/build';
 import { Solver } from '../network/solve';
 import type { Network } from '../network/types';
 import { sweep } from '../sweep';
-import { type Parameter, perturbNetwork, spreadParameters, type SpreadOptions } from './perturb';
+import { type Parameter, perturbInto, spreadParameters, type SpreadOptions, valueCopy } from './perturb';
 
 /** A design ready for spread evaluation. Plain data: it can be rebuilt in a worker from the design. */
 export interface SpreadModel {
@@ -22,6 +22,8 @@ export interface SpreadModel {
   solver: Solver;
   /** The nominal circuit's consistent state at the bottom of the range: each trial starts from it. */
   start: Uint8Array;
+  /** A value copy of `net` that each evaluation re-values in place (`perturbInto`) instead of copying `net`. */
+  scratch: Network;
 }
 
 /** Trip points of one evaluation, per channel in model order (unit of x; NaN when absent). */
@@ -37,7 +39,7 @@ export function buildSpreadModel(design: Design, options: SpreadOptions = {}): S
   const net = buildNetwork(design);
   const solver = new Solver(net);
   const start = sweep(solver, design.quantity.min, design.quantity.max).initial;
-  return { design, net, params: spreadParameters(design, net, options), channels: net.comparators.map((c) => c.id), solver, start };
+  return { design, net, params: spreadParameters(design, net, options), channels: net.comparators.map((c) => c.id), solver, start, scratch: valueCopy(net) };
 }
 
 /**
@@ -62,11 +64,20 @@ export function sweepTrips(design: Design, net: Network, rising: Float64Array, f
   return result.bands.length > 0;
 }
 
+/**
+ * Sweeps the model at the unit point `units` (one value in [-1, 1] per parameter) and writes its
+ * trips at `offset` as `sweepTrips` does; returns true on a band with no stable state.
+ */
+export function sweepAt(model: SpreadModel, units: ArrayLike<number>, rising: Float64Array, falling: Float64Array, offset = 0): boolean {
+  perturbInto(model.scratch, model.params, units);
+  return sweepTrips(model.design, model.scratch, rising, falling, offset, model);
+}
+
 /** Evaluates the model at the unit point `units` (one value in [-1, 1] per parameter). */
 export function evaluateAt(model: SpreadModel, units: ArrayLike<number>): TripSample {
   const n = model.channels.length;
   const rising = new Float64Array(n);
   const falling = new Float64Array(n);
-  const chatter = sweepTrips(model.design, perturbNetwork(model.net, model.params, units), rising, falling, 0, model);
+  const chatter = sweepAt(model, units, rising, falling);
   return { rising, falling, chatter };
 }

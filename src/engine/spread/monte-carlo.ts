@@ -4,8 +4,7 @@
  * gives the same numbers.
  */
 import { createRng, drawUnit } from './distributions';
-import { type SpreadModel, sweepTrips } from './model';
-import { perturbNetwork } from './perturb';
+import { type SpreadModel, sweepAt } from './model';
 
 /** Raw results of trials `from` .. `to` − 1, channel-major within each trial. */
 export interface TrialBlock {
@@ -43,8 +42,7 @@ export function runTrials(model: SpreadModel, seed: number, from: number, to: nu
   const units = new Float64Array(model.params.length);
   for (let i = 0; i < count; i++) {
     trialUnits(model, seed, from + i, units);
-    const net = perturbNetwork(model.net, model.params, units);
-    block.chatter[i] = sweepTrips(model.design, net, block.rising, block.falling, i * n, model) ? 1 : 0;
+    block.chatter[i] = sweepAt(model, units, block.rising, block.falling, i * n) ? 1 : 0;
     onTrial?.(i + 1);
   }
   return block;

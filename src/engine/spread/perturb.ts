@@ -125,15 +125,28 @@ export function parameterValue(p: Parameter, u: number): number {
 }
 
 /**
- * A copy of `net` with every parameter set from `units` (one unit value per parameter, same order).
- * Only the element lists that change are copied; `net` itself is never modified.
+ * A copy of `net` whose values `perturbInto` may change: the element lists whose values carry
+ * parameters are copied element by element; wiring and names are shared with `net`.
  */
-export function perturbNetwork(net: Network, params: readonly Parameter[], units: ArrayLike<number>): Network {
-  const resistors = net.resistors.map((r) => ({ ...r }));
-  const diodes = net.diodes.map((d) => ({ ...d }));
-  const vsources = net.vsources.map((s) => ({ ...s }));
-  const comparators = net.comparators.map((c) => ({ ...c }));
-  params.forEach((p, k) => {
+export function valueCopy(net: Network): Network {
+  return {
+    ...net,
+    resistors: net.resistors.map((r) => ({ ...r })),
+    diodes: net.diodes.map((d) => ({ ...d })),
+    vsources: net.vsources.map((s) => ({ ...s })),
+    comparators: net.comparators.map((c) => ({ ...c })),
+  };
+}
+
+/**
+ * Sets every parameter's field in `net` (a `valueCopy` of the network the parameters were listed
+ * for) from `units`, in place. Every field a parameter drives is written, so one copy serves any
+ * number of points without carrying values over from the last.
+ */
+export function perturbInto(net: Network, params: readonly Parameter[], units: ArrayLike<number>): void {
+  const { resistors, diodes, vsources, comparators } = net;
+  for (let k = 0; k < params.length; k++) {
+    const p = params[k];
     const v = parameterValue(p, units[k]);
     const t = p.target;
     if (t.kind === 'resistor') resistors[t.index].ohms = v;
@@ -143,6 +156,15 @@ export function perturbNetwork(net: Network, params: readonly Parameter[], units
     else if (t.kind === 'vos') comparators[t.index].vos = v;
     else if (t.kind === 'ib-plus') comparators[t.index].ibPlus = v;
     else comparators[t.index].ibMinus = v;
-  });
-  return { ...net, resistors, diodes, vsources, comparators };
+  }
+}
+
+/**
+ * A copy of `net` with every parameter set from `units` (one unit value per parameter, same order).
+ * Only the element lists that change are copied; `net` itself is never modified.
+ */
+export function perturbNetwork(net: Network, params: readonly Parameter[], units: ArrayLike<number>): Network {
+  const copy = valueCopy(net);
+  perturbInto(copy, params, units);
+  return copy;
 }
