@@ -6,7 +6,10 @@ export const CACHE_LIMIT: number;
 export interface Patch {
   name: string;
   file: RegExp;
-  apply(text: string): string | null;
+  /** The replacement text of the file at `path`, or null when its expected text is missing. */
+  apply(text: string, path?: string): string | null;
+  /** For a replacement that loads the original on demand: the original's text, as loaded. */
+  original?(text: string): string | null;
 }
 export const PATCHES: Patch[];
 /** The esbuild plugin applying PATCHES. */

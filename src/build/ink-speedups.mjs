@@ -15,11 +15,14 @@
  *    lines are read from the cache. The shared cache is renewed when it grows past CACHE_LIMIT.
  * 4. The grapheme segmenters these modules and slice-ansi create at load time are made on first
  *    use: the first one costs about 12 ms, and with 1 and 2 a frame of one-cell text needs none.
+ *    Likewise string-width's full module and conf's schema validator and version comparer are
+ *    loaded on first use (a bundled `require` is lazy), not at start-up.
  *
  * Each patch names the text it expects; a dependency update that changes it stops the build with a
  * message, so a patch can never silently fall away.
  */
 import { readFile } from 'node:fs/promises';
+import { dirname, relative, resolve } from 'node:path';
 
 /** Characters that take exactly one terminal cell (see the test for the check). */
 export const ONE_CELL_CLASS =
@@ -30,6 +33,9 @@ export const ONE_CELL_CLASS =
 
 /** Entries per cache map before the shared Output cache is renewed. */
 export const CACHE_LIMIT = 4000;
+
+/** Import prefix that loads a patched file's original text (see `original` of a patch). */
+const ORIGINAL = 'tapline-original:';
 
 /** Replaces each [anchor, replacement] once in `text`; null when an anchor is missing. */
 function edit(text, pairs) {
@@ -61,20 +67,24 @@ function oneCellText(text) {
 /** The patches: which files, and how each is changed (null when the expected text is missing). */
 export const PATCHES = [
   {
+    // The full module (its emoji and width tables take several milliseconds to set up) is
+    // evaluated on the first text that needs it, if ever: `require` of a bundled module is lazy.
     name: 'one-cell fast path in string-width',
     file: /[\\/]node_modules[\\/](?:.*[\\/])?string-width[\\/]index\.js$/,
-    apply(text) {
-      const out = edit(text, [lazySegmenter('segmenter', ''), ['export default function stringWidth(', 'function fullStringWidth(']]);
-      return out && `${out}
-${ONE_CELL_TEXT}
+    apply(text, path) {
+      if (!text.includes('export default function stringWidth(')) return null;
+      return `${ONE_CELL_TEXT}
+let full = null;
 export default function stringWidth(text, options) {
   if (typeof text === 'string' && (!options || (options.ambiguousIsNarrow !== false && !options.countAnsiEscapeCodes)) && oneCellText(text)) {
     return text.includes('\\u001B') ? text.replace(sgr, '').length : text.length;
   }
-  return fullStringWidth(text, options);
+  full ??= require(${JSON.stringify(ORIGINAL + path)}).default;
+  return full(text, options);
 }
 `;
     },
+    original: (text) => edit(text, [lazySegmenter('segmenter', '')]),
   },
   {
     // Every character of one-cell text (SGR codes included) is a grapheme of its own.
@@ -102,6 +112,23 @@ function graphemes(str) {
     apply: (text) => edit(text, [lazySegmenter('GRAPHEME_SEGMENTER', "undefined, {granularity: 'grapheme'}")]),
   },
   {
+    // Settings are kept without a schema, so the schema validator and the version comparer that
+    // conf loads at start-up (about 8 ms) are loaded on first use instead, which is never here.
+    name: 'validator and version comparer loaded on first use in conf',
+    file: /[\\/]node_modules[\\/]conf[\\/]dist[\\/]source[\\/]index\.js$/,
+    apply(text) {
+      const out = edit(text, [
+        ["import { Ajv2020 as Ajv } from 'ajv/dist/2020.js';\n", ''],
+        ["import ajvFormatsModule from 'ajv-formats';\n", ''],
+        ["import semver from 'semver';\n", ''],
+        ['const ajvFormats = ajvFormatsModule.default;', "const ajvFormats = require('ajv-formats').default;"],
+        ['const ajv = new Ajv({', "const ajv = new (require('ajv/dist/2020.js').Ajv2020)({"],
+      ]);
+      if (out === null || /\bAjv\b|ajvFormatsModule/.test(out.replace(/Ajv2020/g, ''))) return null;
+      return out.replace(/\bsemver\./g, "require('semver').");
+    },
+  },
+  {
     name: 'Output caches kept across frames in ink',
     file: /[\\/]node_modules[\\/]ink[\\/]build[\\/]output\.js$/,
     apply(text) {
@@ -126,16 +153,26 @@ export function inkSpeedups() {
     name: 'tapline-ink-speedups',
     setup(build) {
       const applied = new Set();
+      const refuse = (patch, path) => ({ errors: [{ text: `${patch.name}: ${path} no longer has the expected text; update src/build/ink-speedups.mjs for this version` }] });
       for (const patch of PATCHES) {
-        build.onLoad({ filter: patch.file }, async (args) => {
-          const out = patch.apply(await readFile(args.path, 'utf8'));
-          if (out === null) {
-            return { errors: [{ text: `${patch.name}: ${args.path} no longer has the expected text; update src/build/ink-speedups.mjs for this version` }] };
-          }
+        build.onLoad({ filter: patch.file, namespace: 'file' }, async (args) => {
+          const out = patch.apply(await readFile(args.path, 'utf8'), args.path);
+          if (out === null) return refuse(patch, args.path);
           applied.add(patch.name);
-          return { contents: out, loader: 'js' };
+          return { contents: out, loader: 'js', resolveDir: dirname(args.path) };
         });
       }
+      // The original of a replaced module, for the replacement to load when it needs it.
+      // Paths in that namespace are relative to the working folder, so no build path ends up in dist/.
+      const root = build.initialOptions.absWorkingDir ?? process.cwd();
+      build.onResolve({ filter: new RegExp(`^${ORIGINAL}`) }, (args) => ({ path: relative(root, args.path.slice(ORIGINAL.length)), namespace: 'tapline-original' }));
+      build.onLoad({ filter: /.*/, namespace: 'tapline-original' }, async (args) => {
+        const path = resolve(root, args.path);
+        const patch = PATCHES.find((p) => p.original && p.file.test(path));
+        const out = patch ? patch.original(await readFile(path, 'utf8')) : null;
+        if (out === null) return refuse(patch ?? { name: 'original module' }, path);
+        return { contents: out, loader: 'js', resolveDir: dirname(path) };
+      });
       build.onEnd((result) => {
         if (result.errors.length) return;
         const missing = PATCHES.filter((p) => !applied.has(p.name)).map((p) => p.name);

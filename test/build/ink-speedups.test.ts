@@ -23,8 +23,9 @@ function inkDependency(name: string, file: string): string {
 const widthFiles = [here.resolve('string-width'), join(dirname(here.resolve('wrap-ansi')), 'node_modules', 'string-width', 'index.js')];
 const tokenizeIndex = inkDependency('@alcalzone/ansi-tokenize', 'build/index.js');
 const sliceIndex = inkDependency('slice-ansi', 'index.js');
+const confIndex = join(dirname(here.resolve('conf')), 'index.js');
 /** The installed file each patch is written for. */
-const patchedFiles = [...widthFiles, join(dirname(tokenizeIndex), 'tokenize.js'), join(dirname(sliceIndex), 'tokenize-ansi.js'), join(dirname(here.resolve('ink')), 'output.js')];
+const patchedFiles = [...widthFiles, join(dirname(tokenizeIndex), 'tokenize.js'), join(dirname(sliceIndex), 'tokenize-ansi.js'), confIndex, join(dirname(here.resolve('ink')), 'output.js')];
 
 /** Screen-like samples: styled text (SGR codes), wide, emoji, combining and control characters, a link. */
 const SAMPLES = [
@@ -87,6 +88,22 @@ describe('patched modules agree with the originals', () => {
   test('slice-ansi', async () => {
     const [real, fast] = [await load<Slice>(sliceIndex), await patched<Slice>(sliceIndex)];
     for (const text of SAMPLES) expect([text, fast(text, 1, 6)]).toEqual([text, real(text, 1, 6)]);
+  });
+});
+
+describe('conf with its validator loaded on first use', () => {
+  type Store = { get(key: string): unknown; set(key: string, value: unknown): void };
+  type ConfClass = new (options: object) => Store;
+
+  test('keeps values, and a schema still refuses a wrong type', async () => {
+    const Conf = await patched<ConfClass>(confIndex);
+    const cwd = mkdtempSync(join(tmpdir(), 'tapline-conf-'));
+    const plain = new Conf({ cwd, configName: 'plain', projectVersion: '1.0.0', migrations: { '1.0.0': (store: Store) => store.set('migrated', true) } });
+    plain.set('series', 'E96');
+    expect(plain.get('series')).toBe('E96');
+    expect(plain.get('migrated')).toBe(true);
+    const checked = new Conf({ cwd, configName: 'checked', schema: { trials: { type: 'number' } } });
+    expect(() => checked.set('trials', 'many')).toThrow(/trials/);
   });
 });
 
