@@ -10,6 +10,7 @@
  *    versions of the library.
  * 2. The styled-text tokenizer under Ink's Output: the same kind of text is split into characters
  *    directly instead of by grapheme segmentation (each such character is a grapheme of its own).
+ *    Its style differ returns at once for neighbouring characters of the same style.
  * 3. Ink's Output keeps its per-frame caches (styled characters and widths of each line) for the
  *    next frame instead of dropping them: a keystroke changes a few lines of the screen, so most
  *    lines are read from the cache. The shared cache is renewed when it grows past CACHE_LIMIT.
@@ -105,6 +106,17 @@ function graphemes(str) {
 }
 `;
     },
+  },
+  {
+    // Neighbouring characters almost always share their style: equal style lists need no diff.
+    name: 'equal styles short-cut in the style differ',
+    file: /[\\/]node_modules[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]diff\.js$/,
+    apply: (text) =>
+      edit(text, [[
+        'export function diffAnsiCodes(from, to) {',
+        `export function diffAnsiCodes(from, to) {
+    if (from === to || (from.length === to.length && from.every((c, i) => c.code === to[i].code && c.endCode === to[i].endCode))) return [];`,
+      ]]),
   },
   {
     name: 'lazy segmenter in slice-ansi',

@@ -9,6 +9,8 @@ import { inkSpeedups, ONE_CELL_CLASS, PATCHES } from '../../src/build/ink-speedu
 type Width = (text: string, options?: object) => number;
 type Tokenize = (text: string, endChar?: number) => unknown[];
 type Slice = (text: string, start: number, end?: number) => string;
+type Styled = { styles: unknown[] };
+type Diff = (from: unknown[], to: unknown[]) => unknown[];
 
 const here = createRequire(import.meta.url);
 const inkDir = dirname(dirname(here.resolve('ink')));
@@ -25,7 +27,7 @@ const tokenizeIndex = inkDependency('@alcalzone/ansi-tokenize', 'build/index.js'
 const sliceIndex = inkDependency('slice-ansi', 'index.js');
 const confIndex = join(dirname(here.resolve('conf')), 'index.js');
 /** The installed file each patch is written for. */
-const patchedFiles = [...widthFiles, join(dirname(tokenizeIndex), 'tokenize.js'), join(dirname(sliceIndex), 'tokenize-ansi.js'), confIndex, join(dirname(here.resolve('ink')), 'output.js')];
+const patchedFiles = [...widthFiles, join(dirname(tokenizeIndex), 'tokenize.js'), join(dirname(tokenizeIndex), 'diff.js'), join(dirname(sliceIndex), 'tokenize-ansi.js'), confIndex, join(dirname(here.resolve('ink')), 'output.js')];
 
 /** Screen-like samples: styled text (SGR codes), wide, emoji, combining and control characters, a link. */
 const SAMPLES = [
@@ -83,6 +85,15 @@ describe('patched modules agree with the originals', () => {
       expect([text, fast(text)]).toEqual([text, real(text)]);
       expect([text, fast(text, 3)]).toEqual([text, real(text, 3)]);
     }
+  });
+
+  test('the style differ, on the styles of every pair of sample characters', async () => {
+    const tokenize = await load<Tokenize>(tokenizeIndex, 'tokenize');
+    const toStyled = await load<(tokens: unknown[]) => Styled[]>(tokenizeIndex, 'styledCharsFromTokens');
+    const styles = SAMPLES.flatMap((text) => toStyled(tokenize(text)).map((c) => c.styles));
+    const [real, fast] = [await load<Diff>(tokenizeIndex, 'diffAnsiCodes'), await patched<Diff>(tokenizeIndex, 'diffAnsiCodes')];
+    expect(styles.some((s) => s.length > 1)).toBe(true);
+    for (const from of styles) for (const to of styles) expect(fast(from, to)).toEqual(real(from, to));
   });
 
   test('slice-ansi', async () => {
