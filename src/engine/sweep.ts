@@ -38,10 +38,26 @@ export interface Band {
 /** Result of sweeping up from `min` to `max` and back down. */
 export interface SweepResult {
   flips: Flip[];
+  /** Stretches of x in one state; empty when the sweep was asked not to record them. */
   segments: SweepSegment[];
   bands: Band[];
   /** State at the start (x = min, settled going up). */
   initial: State;
+}
+
+/** Options of a sweep. */
+export interface SweepOptions {
+  /** Whether to record the segments; default true. Spread trials need only the flips and bands. */
+  segments?: boolean;
+}
+
+/** What one sweep carries through its walks and settles. */
+interface SweepRun {
+  solver: Solver;
+  out: SweepResult;
+  /** Keys of the states one settle has been through (cleared by each settle; one array per sweep). */
+  seen: (number | string)[];
+  segments: boolean;
 }
 
 /** Numerical zero for margins (V). */
@@ -82,21 +98,23 @@ function violation(a: number, b: number, x: number, sign: number): number {
  * `guess` (e.g. the nominal circuit's starting state when sweeping a perturbed copy), which saves
  * the solves of flipping into it when it is already consistent.
  */
-export function sweep(solver: Solver, min: number, max: number, guess?: State): SweepResult {
+export function sweep(solver: Solver, min: number, max: number, guess?: State, options: SweepOptions = {}): SweepResult {
   const net = solver.net;
   const count = net.comparators.length + net.diodes.length;
   const result: SweepResult = { flips: [], segments: [], bands: [], initial: new Uint8Array(count) };
+  const run: SweepRun = { solver, out: result, seen: [], segments: options.segments !== false };
   let state: State = guess && guess.length === count ? guess.slice() : diodeGuess(solver, min);
-  state = settle(solver, state, min, 'up', result, max);
+  state = settle(run, state, min, 'up', max);
   // Settling the starting state is not a transition of the circuit: only later flips are trips.
   result.flips.length = 0;
   result.initial = state.slice();
-  state = walk(solver, state, min, max, 'up', result);
-  walk(solver, state, max, min, 'down', result);
+  state = walk(run, state, min, max, 'up');
+  walk(run, state, max, min, 'down');
   return result;
 }
 
-function walk(solver: Solver, start: State, from: number, to: number, dir: Direction, out: SweepResult): State {
+function walk(run: SweepRun, start: State, from: number, to: number, dir: Direction): State {
+  const { solver, out } = run;
   const sign = dir === 'up' ? 1 : -1;
   let state = start;
   let x = from;
@@ -115,10 +133,10 @@ function walk(solver: Solver, start: State, from: number, to: number, dir: Direc
       if ((xz - next) * sign < 0) next = xz;
     }
     // The solution keeps its own copy of the state, so segments can share it.
-    if ((next - x) * sign > 0) pushSegment(out, dir, x, next, sol.state);
+    if (run.segments && (next - x) * sign > 0) pushSegment(out, dir, x, next, sol.state);
     if (next === to) return state;
     x = next;
-    state = settle(solver, state, x, dir, out, to);
+    state = settle(run, state, x, dir, to);
     const band = out.bands[out.bands.length - 1];
     if (band && band.direction === dir && band.from === x) {
       if (band.to === to) return state;
@@ -155,10 +173,11 @@ function sameState(a: State, b: State): boolean {
  * cycle: the band with no stable state is recorded and the sweep resumes where a cycle state becomes
  * consistent again.
  */
-function settle(solver: Solver, start: State, x: number, dir: Direction, out: SweepResult, to: number): State {
+function settle(run: SweepRun, start: State, x: number, dir: Direction, to: number): State {
+  const { solver, out, seen } = run;
   const sign = dir === 'up' ? 1 : -1;
   const nc = solver.net.comparators.length;
-  const seen: (number | string)[] = [];
+  seen.length = 0;
   const state = start;
   const limit = 4 * state.length + 8;
   for (let step = 0; step <= limit; step++) {
@@ -166,7 +185,7 @@ function settle(solver: Solver, start: State, x: number, dir: Direction, out: Sw
     const repeat = seen.indexOf(key);
     if (repeat >= 0) return escapeBand(solver, seen.slice(repeat).map((k) => stateFromKey(k, state.length)), x, dir, out, to);
     seen.push(key);
-    const sol = solver.solve(state);
+    const sol = solver.solveKeyed(state, key);
     const { da, db } = sol;
     let worst = -1;
     let amount = 0;

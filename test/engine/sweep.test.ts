@@ -3,6 +3,7 @@ import { analyze } from '../../src/engine/analyze';
 import type { Design } from '../../src/engine/design/types';
 import { buildNetwork } from '../../src/engine/network/build';
 import { Solver } from '../../src/engine/network/solve';
+import { sweep } from '../../src/engine/sweep';
 import { GND } from '../../src/engine/network/types';
 import { fourStepDesign, makeDesign, stepChannel } from '../helpers/designs';
 import { logUniform, rng } from '../helpers/random';
@@ -160,5 +161,21 @@ describe('oscillation', () => {
     expect(a.chatter.length).toBeGreaterThan(0);
     expect(a.findings.find((f) => f.code === 'no-stable-state')?.severity).toBe('error');
     expect(a.findings.some((f) => f.code === 'negative-feedback')).toBe(true);
+  });
+});
+
+describe('sweep options', () => {
+  test('without segments the flips, bands and starting state are the same (exact)', () => {
+    // Reference: the same sweep with segments recorded. Both a plain four-step bar and a band with no stable state.
+    const oscillating = makeDesign({
+      string: [10e3, 10e3],
+      channels: [stepChannel('N', 1, 'T1', { seriesMinus: 10e3, feedback: { ohms: 100e3, to: 'minus' }, pullup: { ohms: 10e3, to: 'supply' } })],
+    });
+    for (const d of [fourStepDesign(470e3), oscillating]) {
+      const full = sweep(new Solver(buildNetwork(d)), d.quantity.min, d.quantity.max);
+      const lean = sweep(new Solver(buildNetwork(d)), d.quantity.min, d.quantity.max, undefined, { segments: false });
+      expect(lean.segments).toEqual([]);
+      expect({ ...lean, segments: full.segments }).toEqual(full);
+    }
   });
 });

@@ -232,7 +232,11 @@ export class Solver {
 
   /** Solves the network in `state`, from the cache when it has been solved before. */
   solve(state: State): Solution {
-    const key = stateKey(state);
+    return this.solveKeyed(state, stateKey(state));
+  }
+
+  /** `solve` for a caller that already has the state's `stateKey`. */
+  solveKeyed(state: State, key: number | string): Solution {
     const hit = this.cache.get(key);
     if (hit) return hit;
     const sol = this.factorAndSolve(state);
@@ -361,7 +365,8 @@ export function stateKey(state: State): number | string {
   if (n <= 30) {
     // Small-integer bit operations: the common case, and the hot path of every sweep.
     let key = 0;
-    for (let k = 0; k < n; k++) if (state[k]) key |= 1 << k;
+    // (−s) >>> 31 is 1 for any non-zero byte and 0 for zero: the truthiness of state[k], without a branch.
+    for (let k = 0; k < n; k++) key |= (-state[k] >>> 31) << k;
     return key;
   }
   if (n > 52) {

@@ -51,7 +51,7 @@ export function buildSpreadModel(design: Design, options: SpreadOptions = {}): S
 export function sweepTrips(design: Design, net: Network, rising: Float64Array, falling: Float64Array, offset = 0, model?: SpreadModel): boolean {
   const nc = net.comparators.length;
   if (model) model.solver.load(net);
-  const result = sweep(model?.solver ?? new Solver(net), design.quantity.min, design.quantity.max, model?.start);
+  const result = sweep(model?.solver ?? new Solver(net), design.quantity.min, design.quantity.max, model?.start, { segments: false });
   for (let k = 0; k < nc; k++) {
     rising[offset + k] = NaN;
     falling[offset + k] = NaN;

@@ -1,6 +1,6 @@
 import { lusolve } from 'mathjs';
 import { describe, expect, test } from 'vitest';
-import { GMIN, Solver } from '../../../src/engine/network/solve';
+import { GMIN, Solver, stateFromKey, stateKey } from '../../../src/engine/network/solve';
 import { GND, type Network } from '../../../src/engine/network/types';
 import { logUniform, rng } from '../../helpers/random';
 
@@ -103,5 +103,17 @@ describe('Solver', () => {
     const again = reused.solve(b.state);
     expect([...again.v0]).toEqual([...fresh.v0]);
     expect([...again.v1]).toEqual([...fresh.v1]);
+  });
+});
+
+describe('state keys', () => {
+  test('a key is the state read as binary digits, any non-zero byte a 1, and turns back into the state', () => {
+    // Reference: positional binary notation (bit k = element k), worked by hand: 1 + 4 + 8 = 13.
+    expect(stateKey(Uint8Array.from([1, 0, 1, 1]))).toBe(13);
+    expect(stateKey(Uint8Array.from([255, 0, 2, 1]))).toBe(13);
+    expect([...stateFromKey(13, 4)]).toEqual([1, 0, 1, 1]);
+    const wide = new Uint8Array(40);
+    wide[39] = 1;
+    expect(stateKey(wide)).toBe(2 ** 39);
   });
 });

@@ -1,6 +1,8 @@
+import { createHash } from 'node:crypto';
 import { describe, expect, test } from 'vitest';
 import { buildSpreadModel } from '../../../src/engine/spread/model';
 import { joinBlocks, runTrials } from '../../../src/engine/spread/monte-carlo';
+import { eightStepDesign, fourStepDesign } from '../../helpers/designs';
 import { dividerDesign, smallFeedbackDesign } from '../../helpers/spread-designs';
 
 describe('Monte Carlo trials', () => {
@@ -44,5 +46,20 @@ describe('Monte Carlo trials', () => {
     const analytic = Math.sqrt((d1 * u) ** 2 + (d2 * u) ** 2);
     expect(Math.abs(sd / analytic - 1)).toBeLessThan(0.02);
     expect(mean).toBeCloseTo(2.5, 3);
+  });
+
+  test('trials 100..599 of seed 7 are bit for bit those recorded before the trial speed-ups', () => {
+    // Regression pin: SHA-256 (first 128 bits) of the rising, falling and chatter arrays as the engine
+    // produced them at commit 09486d4, before the speed-ups that must not change any number.
+    const pins: [string, Parameters<typeof buildSpreadModel>[0], string][] = [
+      ['eight steps', eightStepDesign(), 'a8d42e0a4830b6cc8607da6837d2bdc7'],
+      ['four steps, 470k feedback', fourStepDesign(470e3), '68ebae3921fc9dfb1f43e75bf7bb2edc'],
+      ['one step with feedback', smallFeedbackDesign(), '996b3e9149c32d63bd4a642ae8fb8a01'],
+    ];
+    for (const [name, design, pin] of pins) {
+      const b = runTrials(buildSpreadModel(design), 7, 100, 600);
+      const hash = createHash('sha256').update(new Uint8Array(b.rising.buffer)).update(new Uint8Array(b.falling.buffer)).update(b.chatter).digest('hex');
+      expect(`${name}: ${hash.slice(0, 32)}`).toBe(`${name}: ${pin}`);
+    }
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { buildNetwork } from '../../../src/engine/network/build';
-import { parameterValue, perturbNetwork, spreadParameters } from '../../../src/engine/spread/perturb';
+import { parameterValue, perturbInto, perturbNetwork, spreadParameters, valueCopy } from '../../../src/engine/spread/perturb';
 import { smallFeedbackDesign } from '../../helpers/spread-designs';
 
 describe('uncertain parameters', () => {
@@ -39,5 +39,18 @@ describe('uncertain parameters', () => {
     expect(JSON.stringify(net)).toBe(before);
     expect(moved.resistors[0].ohms).toBeCloseTo(10100, 9);
     expect(moved.comparators[0].vos).toBe(d.part.vosMax);
+  });
+
+  test('one copy re-valued point after point equals a fresh perturbed copy at each point (exact)', () => {
+    // Reference: perturbNetwork, which copies the nominal network anew for every point.
+    const d = smallFeedbackDesign();
+    const net = buildNetwork(d);
+    const ps = spreadParameters(d, net);
+    const copy = valueCopy(net);
+    for (const u of [1, -1, 0.3, 0]) {
+      const units = ps.map((_, k) => (k % 2 ? u : -u));
+      perturbInto(copy, ps, units);
+      expect(copy).toEqual(perturbNetwork(net, ps, units));
+    }
   });
 });
