@@ -1,4 +1,4 @@
-import { type Solution, type Solver, type State, stateFromKey, stateKey } from './network/solve';
+import { type Solution, type Solver, type State, stateFromKey, stateKey, toggledKey } from './network/solve';
 import { GND } from './network/types';
 
 /** Sweep direction: x rising or falling. */
@@ -55,9 +55,11 @@ export interface SweepOptions {
 interface SweepRun {
   solver: Solver;
   out: SweepResult;
-  /** Keys of the states one settle has been through (cleared by each settle; one array per sweep). */
+  /** Keys of the states one settle has been through (reused by each settle; one array per sweep). */
   seen: (number | string)[];
   segments: boolean;
+  /** Key of the state the last settle returned. */
+  key: number | string;
 }
 
 /** Numerical zero for margins (V). */
@@ -102,7 +104,7 @@ export function sweep(solver: Solver, min: number, max: number, guess?: State, o
   const net = solver.net;
   const count = net.comparators.length + net.diodes.length;
   const result: SweepResult = { flips: [], segments: [], bands: [], initial: new Uint8Array(count) };
-  const run: SweepRun = { solver, out: result, seen: [], segments: options.segments !== false };
+  const run: SweepRun = { solver, out: result, seen: [], segments: options.segments !== false, key: 0 };
   let state: State = guess && guess.length === count ? guess.slice() : diodeGuess(solver, min);
   state = settle(run, state, min, 'up', max);
   // Settling the starting state is not a transition of the circuit: only later flips are trips.
@@ -118,9 +120,10 @@ function walk(run: SweepRun, start: State, from: number, to: number, dir: Direct
   const sign = dir === 'up' ? 1 : -1;
   let state = start;
   let x = from;
+  let key = stateKey(state);
   const limit = 4 * (state.length + 2) * (state.length + 2) + 16;
   for (let step = 0; step < limit; step++) {
-    const sol = solver.solve(state);
+    const sol = solver.solveKeyed(state, key);
     let next = to;
     for (let k = 0; k < state.length; k++) {
       const flip = state[k] ? 1 : -1;
@@ -137,7 +140,9 @@ function walk(run: SweepRun, start: State, from: number, to: number, dir: Direct
     if (next === to) return state;
     x = next;
     state = settle(run, state, x, dir, to);
-    const band = out.bands[out.bands.length - 1];
+    key = run.key;
+    // Guarded: reading index −1 of an empty array is a slow named-property lookup.
+    const band = out.bands.length > 0 ? out.bands[out.bands.length - 1] : undefined;
     if (band && band.direction === dir && band.from === x) {
       if (band.to === to) return state;
       x = band.to;
@@ -147,7 +152,7 @@ function walk(run: SweepRun, start: State, from: number, to: number, dir: Direct
 }
 
 function pushSegment(out: SweepResult, dir: Direction, a: number, b: number, state: State): void {
-  const last = out.segments[out.segments.length - 1];
+  const last = out.segments.length > 0 ? out.segments[out.segments.length - 1] : undefined;
   const from = Math.min(a, b);
   const to = Math.max(a, b);
   if (last && last.direction === dir && sameState(last.state, state)) {
@@ -177,14 +182,19 @@ function settle(run: SweepRun, start: State, x: number, dir: Direction, to: numb
   const { solver, out, seen } = run;
   const sign = dir === 'up' ? 1 : -1;
   const nc = solver.net.comparators.length;
-  seen.length = 0;
+  let seenCount = 0;
   const state = start;
+  let key = stateKey(state);
   const limit = 4 * state.length + 8;
   for (let step = 0; step <= limit; step++) {
-    const key = stateKey(state);
-    const repeat = seen.indexOf(key);
-    if (repeat >= 0) return escapeBand(solver, seen.slice(repeat).map((k) => stateFromKey(k, state.length)), x, dir, out, to);
-    seen.push(key);
+    let repeat = -1;
+    for (let i = 0; i < seenCount && repeat < 0; i++) if (seen[i] === key) repeat = i;
+    if (repeat >= 0) {
+      const escaped = escapeBand(solver, seen.slice(repeat, seenCount).map((k) => stateFromKey(k, state.length)), x, dir, out, to);
+      run.key = stateKey(escaped);
+      return escaped;
+    }
+    seen[seenCount++] = key;
     const sol = solver.solveKeyed(state, key);
     const { da, db } = sol;
     let worst = -1;
@@ -197,7 +207,10 @@ function settle(run: SweepRun, start: State, x: number, dir: Direction, to: numb
         worst = k;
       }
     }
-    if (worst < 0) return state;
+    if (worst < 0) {
+      run.key = key;
+      return state;
+    }
     let pinPlus = 0;
     let pinMinus = 0;
     if (worst < nc) {
@@ -206,8 +219,10 @@ function settle(run: SweepRun, start: State, x: number, dir: Direction, to: numb
       pinMinus = voltageAt(sol, c.minus, x);
     }
     state[worst] = state[worst] ? 0 : 1;
+    key = toggledKey(key, state, worst);
     out.flips.push({ element: worst, to: state[worst] === 1, x, direction: dir, pinPlus, pinMinus });
   }
+  run.key = key;
   return state;
 }
 

@@ -383,6 +383,18 @@ export function stateKey(state: State): number | string {
   return key;
 }
 
+/**
+ * The `stateKey` of `state` just after its element k changed, from the key before the change:
+ * equal to `stateKey(state)` without a pass over the state (except for text keys).
+ */
+export function toggledKey(key: number | string, state: State, k: number): number | string {
+  const n = state.length;
+  if (typeof key === 'string' || n > 52) return stateKey(state);
+  if (n <= 30) return key ^ (1 << k);
+  const bit = 2 ** k;
+  return state[k] ? key + bit : key - bit;
+}
+
 /** The state of `length` elements that `stateKey` turned into `key`. */
 export function stateFromKey(key: number | string, length: number): State {
   const state = new Uint8Array(length);

@@ -1,6 +1,6 @@
 import { lusolve } from 'mathjs';
 import { describe, expect, test } from 'vitest';
-import { GMIN, Solver, stateFromKey, stateKey } from '../../../src/engine/network/solve';
+import { GMIN, Solver, stateFromKey, stateKey, toggledKey } from '../../../src/engine/network/solve';
 import { GND, type Network } from '../../../src/engine/network/types';
 import { logUniform, rng } from '../../helpers/random';
 
@@ -115,5 +115,20 @@ describe('state keys', () => {
     const wide = new Uint8Array(40);
     wide[39] = 1;
     expect(stateKey(wide)).toBe(2 ** 39);
+  });
+
+  test('the key after one element changes equals the key computed afresh, for short, long and text keys', () => {
+    // Reference: stateKey of the changed state.
+    const r = rng(5);
+    for (const n of [4, 30, 31, 52, 53, 60]) {
+      const state = Uint8Array.from({ length: n }, () => (r() < 0.5 ? 1 : 0));
+      let key = stateKey(state);
+      for (let step = 0; step < 20; step++) {
+        const k = Math.floor(r() * n);
+        state[k] = state[k] ? 0 : 1;
+        key = toggledKey(key, state, k);
+        expect(key).toBe(stateKey(state));
+      }
+    }
   });
 });
