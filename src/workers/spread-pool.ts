@@ -45,6 +45,17 @@ export function defaultWorkerUrl(): URL {
   return !existsSync(beside) && existsSync(above) ? above : beside;
 }
 
+/** `promise`, or a rejection with an AbortError as soon as `signal` aborts. */
+function untilAborted<T>(promise: Promise<T>, signal: AbortSignal | undefined): Promise<T> {
+  if (!signal) return promise;
+  if (signal.aborted) return Promise.reject(abortError());
+  return new Promise<T>((resolve, reject) => {
+    const onAbort = () => reject(abortError());
+    signal.addEventListener('abort', onAbort, { once: true });
+    promise.then(resolve, reject).finally(() => signal.removeEventListener('abort', onAbort));
+  });
+}
+
 function closedError(): Error {
   return new Error('the spread pool is closed; create a new one');
 }
@@ -116,8 +127,7 @@ export class SpreadPool {
     const trials = o.trials ?? DEFAULT_TRIALS;
     const workers = this.workers;
     const jobs = spreadJobs(workers?.nextModel() ?? 0, trials, seed, o.chunk ?? DEFAULT_CHUNK, o.worstCase !== false);
-    const ready = await starting;
-    if (o.signal?.aborted) throw abortError();
+    const ready = await untilAborted(starting, o.signal);
     let outcome: Outcome;
     let used = 0;
     if (workers && ready > 0) {

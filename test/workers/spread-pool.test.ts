@@ -84,6 +84,20 @@ describe('reusable spread pool', () => {
     }
   });
 
+  test('a run cancelled while the workers start rejects, and the next run is exact', async () => {
+    const pool = new SpreadPool({ threads: 2, workerUrl: await buildSpreadWorker() });
+    try {
+      const controller = new AbortController();
+      const cancelled = pool.run(design(), { trials: 5000, signal: controller.signal });
+      setTimeout(() => controller.abort(), 1);
+      await expect(cancelled).rejects.toMatchObject({ name: 'AbortError' });
+      const after = await pool.run(design(), { trials: 100, seed: 13 });
+      expect(after.report).toEqual(runSpread(design(), { trials: 100, seed: 13 }));
+    } finally {
+      await pool.close();
+    }
+  });
+
   test('runs queued behind each other each get their own numbers', async () => {
     const pool = new SpreadPool({ threads: 2, workerUrl: await buildSpreadWorker() });
     try {
