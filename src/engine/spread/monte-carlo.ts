@@ -21,7 +21,8 @@ export interface TrialBlock {
 /** Draws the unit point of trial `trial` for seed `seed`: one value in [-1, 1] per parameter. */
 export function trialUnits(model: SpreadModel, seed: number, trial: number, out = new Float64Array(model.params.length)): Float64Array {
   const rng = createRng(seed, trial);
-  model.params.forEach((p, k) => (out[k] = drawUnit(rng, p.distribution)));
+  const params = model.params;
+  for (let k = 0; k < params.length; k++) out[k] = drawUnit(rng, params[k].distribution);
   return out;
 }
 
