@@ -15,8 +15,6 @@ import { eightStepDesign } from '../helpers/designs';
 import { type BenchResult, median } from './measure';
 
 const TRIALS = 10_000;
-/** Trials per job: 20 jobs, so the last ones even out the threads' finishing times. */
-const CHUNK = 500;
 
 async function timeRuns(repeats: number, run: (r: number) => Promise<unknown> | unknown): Promise<number> {
   const times: number[] = [];
@@ -45,7 +43,8 @@ export async function benchSpread(repeats = 5): Promise<BenchResult[]> {
 
   const cores = availableParallelism();
   const url = await workerUrl();
-  const options = { trials: TRIALS, worstCase: false, chunk: CHUNK };
+  // The pool's own chunk size, as the screen and the batch command use it.
+  const options = { trials: TRIALS, worstCase: false };
   const pool = new SpreadPool({ threads: cores, workerUrl: url });
   let warm: number;
   try {
