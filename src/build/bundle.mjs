@@ -18,8 +18,11 @@ try {
     target: 'node20',
     outdir: 'dist',
     chunkNames: 'chunks/[name]-[hash]',
-    // Ink's developer-tools bridge is only loaded with DEV=true; esbuild is only used by test helpers.
-    external: ['react-devtools-core', 'esbuild'],
+    // Left to Node at run time (from node_modules), as they are needed rarely or never: Ink's
+    // developer-tools bridge (only with DEV=true), esbuild (test helpers only), and conf's schema
+    // validator and version comparer (only with a schema or migrations, which tapline does not use;
+    // see ink-speedups.mjs). Bundled, they would be parsed at every start for nothing.
+    external: ['react-devtools-core', 'esbuild', 'ajv/dist/2020.js', 'ajv-formats', 'semver'],
     define: { 'process.env.NODE_ENV': '"production"' },
     minify: true,
     legalComments: 'none',
