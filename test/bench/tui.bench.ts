@@ -16,7 +16,7 @@ import { formatEng } from '../../src/engine/values';
 import { type BenchResult, median } from './measure';
 
 const FRAME_MARK = 'Probe';
-const RUNS = 7;
+const RUNS = 11;
 
 /** The bundled CLI: dist/tapline.js under the working directory (npm scripts run at the root). */
 function binPath(): string {
