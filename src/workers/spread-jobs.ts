@@ -3,8 +3,8 @@
  * worker needs, the cancellation error, and running the jobs in this thread when no worker can start.
  */
 import {
-  type buildSpreadModel,
   runTrials,
+  type SpreadModel,
   type SpreadRunOptions,
   type TrialBlock,
   worstCase,
@@ -57,7 +57,7 @@ export function pickModelOptions(o: SpreadRunOptions): SpreadModelOptions {
 }
 
 /** Runs `jobs` in this thread, yielding to the event loop between them so progress and cancel get through. */
-export async function runHere(jobs: SpreadJob[], model: ReturnType<typeof buildSpreadModel>, total: number, o: SpreadRunOptions & RunControl): Promise<Outcome> {
+export async function runHere(jobs: SpreadJob[], model: SpreadModel, total: number, o: SpreadRunOptions & RunControl): Promise<Outcome> {
   const out: Outcome = { blocks: [], worst: null };
   let done = 0;
   for (const job of jobs) {
