@@ -10,7 +10,7 @@ import {
   worstCase,
   type WorstCase,
 } from '../engine/spread';
-import type { SpreadJob, SpreadModelOptions } from './spread-protocol';
+import type { SpreadJob, SpreadModelOptions, SpreadReply } from './spread-protocol';
 
 /** How one run is split and followed: chunk size, progress, cancellation. */
 export interface RunControl {
@@ -56,6 +56,12 @@ export function pickModelOptions(o: SpreadRunOptions): SpreadModelOptions {
   return JSON.parse(JSON.stringify({ resistorTolerance, partTolerance, referenceTolerance, partLimit, ledKneeSpread, supplyRange, distributions, maxCornerParameters }));
 }
 
+/** Runs one job in this thread and answers as a worker would. */
+export function jobHere(model: SpreadModel, job: SpreadJob, o: SpreadRunOptions): Extract<SpreadReply, { kind: 'worst' | 'trials' }> {
+  if (job.kind === 'worst') return { kind: 'worst', model: job.model, job: job.job, worst: worstCase(model, o) };
+  return { kind: 'trials', model: job.model, job: job.job, block: runTrials(model, job.seed, job.from, job.to) };
+}
+
 /** Runs `jobs` in this thread, yielding to the event loop between them so progress and cancel get through. */
 export async function runHere(jobs: SpreadJob[], model: SpreadModel, total: number, o: SpreadRunOptions & RunControl): Promise<Outcome> {
   const out: Outcome = { blocks: [], worst: null };
@@ -63,12 +69,13 @@ export async function runHere(jobs: SpreadJob[], model: SpreadModel, total: numb
   for (const job of jobs) {
     await new Promise((resolve) => setImmediate(resolve));
     if (o.signal?.aborted) throw abortError();
-    if (job.kind === 'worst') {
-      out.worst = worstCase(model, o);
+    const reply = jobHere(model, job, o);
+    if (reply.kind === 'worst') {
+      out.worst = reply.worst;
       continue;
     }
-    out.blocks.push(runTrials(model, job.seed, job.from, job.to));
-    done += job.to - job.from;
+    out.blocks.push(reply.block);
+    done += reply.block.to - reply.block.from;
     o.onProgress?.(done, total);
   }
   return out;

@@ -13,7 +13,7 @@ import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import type { Design } from '../engine/design/types';
 import { buildSpreadModel, DEFAULT_TRIALS, joinBlocks, type SpreadReport, type SpreadRunOptions, summarize } from '../engine/spread';
-import { abortError, DEFAULT_CHUNK, type Outcome, pickModelOptions, type RunControl, runHere, spreadJobs } from './spread-jobs';
+import { abortError, DEFAULT_CHUNK, jobHere, type Outcome, pickModelOptions, type RunControl, runHere, spreadJobs } from './spread-jobs';
 import { WorkerSet } from './worker-set';
 
 export type { RunControl } from './spread-jobs';
@@ -24,6 +24,11 @@ export interface SpreadPoolOptions {
   threads?: number;
   /** Worker script (an ES module); default `defaultWorkerUrl()`. */
   workerUrl?: URL | string;
+  /**
+   * This thread takes jobs too, between event-loop turns, from the start of each run instead of
+   * waiting for the workers to come up (batch use; the screen leaves it off to stay responsive).
+   */
+  helpHere?: boolean;
 }
 
 /** Options of a one-off parallel run: the pool's and the run's. */
@@ -68,12 +73,14 @@ function closedError(): Error {
  */
 export class SpreadPool {
   private readonly workers: WorkerSet | null;
+  private readonly helpHere: boolean;
   private queue: Promise<void> = Promise.resolve();
   private isClosed = false;
 
   constructor(options: SpreadPoolOptions = {}) {
     const threads = Math.max(0, Math.floor(options.threads ?? availableParallelism()));
     this.workers = threads > 0 ? new WorkerSet(threads, options.workerUrl ?? defaultWorkerUrl()) : null;
+    this.helpHere = options.helpHere ?? false;
   }
 
   /** Worker threads alive now (started or starting). */
@@ -127,11 +134,13 @@ export class SpreadPool {
     const trials = o.trials ?? DEFAULT_TRIALS;
     const workers = this.workers;
     const jobs = spreadJobs(workers?.nextModel() ?? 0, trials, seed, o.chunk ?? DEFAULT_CHUNK, o.worstCase !== false);
-    const ready = await untilAborted(starting, o.signal);
+    const message = { kind: 'model' as const, model: jobs[0]?.model ?? 0, design, options: pickModelOptions(o) };
     let outcome: Outcome;
     let used = 0;
-    if (workers && ready > 0) {
-      const message = { kind: 'model' as const, model: jobs[0]?.model ?? 0, design, options: pickModelOptions(o) };
+    if (workers && this.helpHere) {
+      // Workers join as they come up; until then (or if none can start) this thread does the work.
+      ({ outcome, used } = await workers.run(message, jobs, trials, o, (job) => jobHere(model, job, o)));
+    } else if (workers && (await untilAborted(starting, o.signal)) > 0) {
       ({ outcome, used } = await workers.run(message, jobs, trials, o));
     } else outcome = await runHere(jobs, model, trials, o);
     const report = summarize(model, joinBlocks(outcome.blocks, model.channels.length), seed, outcome.worst, o);
@@ -141,12 +150,14 @@ export class SpreadPool {
 
 /**
  * Runs worst case and Monte Carlo for `design` on a one-off pool (workers started for this run and
- * ended after it), as the batch command does. `threads` is capped at the number of jobs.
+ * ended after it), as the batch command does. This thread works too from the first moment, so the
+ * default is one worker fewer than the cores; `threads` (workers besides this thread) is capped at
+ * the number of jobs.
  */
 export async function runSpreadParallel(design: Design, options: SpreadRunOptions & PoolOptions = {}): Promise<ParallelSpread> {
   const jobCount = spreadJobs(0, options.trials ?? DEFAULT_TRIALS, 1, options.chunk ?? DEFAULT_CHUNK, options.worstCase !== false).length;
-  const threads = Math.min(Math.floor(options.threads ?? availableParallelism()), jobCount);
-  const pool = new SpreadPool({ threads, workerUrl: options.workerUrl });
+  const threads = Math.min(Math.floor(options.threads ?? availableParallelism() - 1), jobCount);
+  const pool = new SpreadPool({ threads, workerUrl: options.workerUrl, helpHere: options.helpHere ?? true });
   try {
     return await pool.run(design, options);
   } finally {

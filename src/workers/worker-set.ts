@@ -7,6 +7,9 @@ import { Worker } from 'node:worker_threads';
 import { abortError, type Outcome, type RunControl } from './spread-jobs';
 import type { SpreadJob, SpreadModelMessage, SpreadReply } from './spread-protocol';
 
+/** A reply to a job (not the start-up `ready`). */
+type ReplyOf = Exclude<SpreadReply, { kind: 'ready' }>;
+
 /** One worker thread and what it is doing. */
 interface Slot {
   worker: Worker;
@@ -29,7 +32,7 @@ interface Run {
   message: SpreadModelMessage;
   /** The next job for `slot`, or null when every job is out. */
   nextJob(slot: Slot): SpreadJob | null;
-  take(reply: Exclude<SpreadReply, { kind: 'ready' }>): void;
+  take(reply: ReplyOf): void;
   /** Ends the run: resolves it (null) or rejects it; later calls do nothing. */
   settle(error: Error | null): void;
 }
@@ -66,8 +69,12 @@ export class WorkerSet {
     return this.starting;
   }
 
-  /** Serves one run: resolves with what the jobs produced and how many workers took part. */
-  run(message: SpreadModelMessage, jobs: SpreadJob[], total: number, control: RunControl): Promise<{ outcome: Outcome; used: number }> {
+  /**
+   * Serves one run: resolves with what the jobs produced and how many workers took part. With
+   * `here`, this thread takes jobs too (one per event-loop turn, through `here`) from the start, so
+   * the run needs no worker to be ready yet: workers join as they come up.
+   */
+  run(message: SpreadModelMessage, jobs: SpreadJob[], total: number, control: RunControl, here?: (job: SpreadJob) => ReplyOf): Promise<{ outcome: Outcome; used: number }> {
     return new Promise((resolve, reject) => {
       const outcome: Outcome = { blocks: [], worst: null };
       const used = new Set<Slot>();
@@ -107,12 +114,30 @@ export class WorkerSet {
         },
       };
       if (jobs.length === 0) return resolve({ outcome, used: 0 });
-      if (!this.slots.some((s) => s.ready)) return reject(new Error('spread analysis failed: no worker thread is running'));
+      if (!here && !this.slots.some((s) => s.ready)) return reject(new Error('spread analysis failed: no worker thread is running'));
       this.current = run;
       if (signal?.aborted) return run.settle(abortError());
       signal?.addEventListener('abort', onAbort, { once: true });
       for (const slot of [...this.slots]) this.feed(slot);
+      if (here) void this.helpHere(run, () => (next < jobs.length ? jobs[next++] : null), here);
     });
+  }
+
+  /** This thread's share of `run`: a job per event-loop turn until none is left or the run ends. */
+  private async helpHere(run: Run, nextJob: () => SpreadJob | null, here: (job: SpreadJob) => ReplyOf): Promise<void> {
+    for (;;) {
+      await new Promise((resolve) => setImmediate(resolve));
+      if (this.current !== run) return;
+      const job = nextJob();
+      if (!job) return;
+      let reply: ReplyOf;
+      try {
+        reply = here(job);
+      } catch (e) {
+        reply = { kind: 'failed', model: job.model, job: job.job, message: (e as Error).message };
+      }
+      run.take(reply);
+    }
   }
 
   /** Rejects the current run with `reason` and ends every worker. */
@@ -166,6 +191,8 @@ export class WorkerSet {
       this.hasStarted = true;
       slot.worker.unref();
       slot.onReady();
+      // A run that started without waiting for the workers takes this one on now.
+      this.feed(slot);
       return;
     }
     slot.busy = false;

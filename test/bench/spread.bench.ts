@@ -5,8 +5,9 @@
  * - n cores, warm pool: a `SpreadPool` started and warmed by one untimed run (as the screen keeps
  *   it), then whole runs timed (hand-out, joining and summary included). Limit 500/n ms: strictly
  *   proportional, nothing allowed for start-up.
- * - n cores, cold: a fresh pool per run, as `tapline spread` does: worker start-up, their JIT
- *   warm-up, the run and closing the pool. Limit 500/n + 150 ms, the 150 ms for start-up and warm-up.
+ * - n cores, cold: a one-off run as `tapline spread` does it: this thread starts at once and n − 1
+ *   fresh workers join as they come up (their start-up and JIT warm-up included), then the pool is
+ *   closed. Limit 500/n + 150 ms, the 150 ms for start-up and warm-up.
  */
 import { availableParallelism } from 'node:os';
 import { buildSpreadModel, runTrials } from '../../src/engine/spread';
@@ -53,7 +54,8 @@ export async function benchSpread(repeats = 5): Promise<BenchResult[]> {
   } finally {
     await pool.close();
   }
-  const cold = await timeRuns(repeats, (r) => runSpreadParallel(design, { ...options, seed: r + 1, threads: cores, workerUrl: url }));
+  // As `tapline spread` runs: this thread starts at once, n − 1 workers join as they come up.
+  const cold = await timeRuns(repeats, (r) => runSpreadParallel(design, { ...options, seed: r + 1, workerUrl: url }));
 
   return [
     { name: 'spread: 10k trials, 8 channels, one core', medianMs: one, limitMs: 500 },

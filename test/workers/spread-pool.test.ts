@@ -12,10 +12,22 @@ describe('spread worker pool', () => {
     const workerUrl = await buildSpreadWorker();
     const base = runSpread(design(), { trials: 600, seed: 3 });
     for (const threads of [1, 2, 3]) {
+      // This thread works alongside from the start; workers join as they come up.
       const run = await runSpreadParallel(design(), { trials: 600, seed: 3, threads, chunk: 70, workerUrl });
-      expect(run.threads).toBe(threads);
+      expect(run.threads).toBeLessThanOrEqual(threads);
       expect(run.report).toEqual(base);
+      const only = await runSpreadParallel(design(), { trials: 600, seed: 3, threads, chunk: 70, workerUrl, helpHere: false });
+      expect(only.threads).toBe(threads);
+      expect(only.report).toEqual(base);
     }
+  });
+
+  test('a one-off run does not wait for its workers: this thread starts at once and they join', async () => {
+    const workerUrl = await buildSpreadWorker();
+    const base = runSpread(design(), { trials: 4000, seed: 5 });
+    const run = await runSpreadParallel(design(), { trials: 4000, seed: 5, threads: 1, chunk: 100, workerUrl });
+    expect(run.threads).toBe(1);
+    expect(run.report).toEqual(base);
   });
 
   test('without a worker script it runs in this thread and still gives the same report', async () => {
