@@ -14,6 +14,8 @@
  * 3. Ink's Output keeps its per-frame caches (styled characters and widths of each line) for the
  *    next frame instead of dropping them: a keystroke changes a few lines of the screen, so most
  *    lines are read from the cache. The shared cache is renewed when it grows past CACHE_LIMIT.
+ *    A screen row made of the same cells as in the last frame keeps its text, and blank cells are
+ *    one shared frozen object instead of a new one per cell and frame.
  * 4. The grapheme segmenters these modules and slice-ansi create at load time are made on first
  *    use: the first one costs about 12 ms, and with 1 and 2 a frame of one-cell text needs none.
  *    Likewise string-width's full module and conf's schema validator and version comparer are
@@ -145,8 +147,36 @@ function graphemes(str) {
     file: /[\\/]node_modules[\\/]ink[\\/]build[\\/]output\.js$/,
     apply(text) {
       if (!text.includes('class OutputCaches {')) return null;
-      const out = edit(text, [['    caches = new OutputCaches();', '    caches = sharedCaches();']]);
+      const out = edit(text, [
+        ['    caches = new OutputCaches();', '    caches = sharedCaches();'],
+        [`                row.push({
+                    type: 'char',
+                    value: ' ',
+                    fullWidth: false,
+                    styles: [],
+                });`, '                row.push(BLANK);'],
+        [`        const generatedOutput = output
+            .map(line => {
+            // See https://github.com/vadimdemedes/ink/pull/564#issuecomment-1637022742
+            const lineWithoutEmptyItems = line.filter(item => item !== undefined);
+            return styledCharsToString(lineWithoutEmptyItems).trimEnd();
+        })
+            .join('\\n');`, `        const generatedOutput = output.map(rowText).join('\\n');
+        rowsSeen.length = output.length;`],
+      ]);
       return out && `${out}
+// One shared, frozen blank cell: cells are replaced, never changed, and freezing makes sure of it.
+const BLANK = Object.freeze({ type: 'char', value: ' ', fullWidth: false, styles: Object.freeze([]) });
+// The text of each row of the last frame with the cells it was made from: a row whose cells are
+// the same objects as last time (the caches above hand out the same ones) keeps its text.
+const rowsSeen = [];
+function rowText(line, y) {
+    const seen = rowsSeen[y];
+    if (seen && seen.cells.length === line.length && seen.cells.every((cell, x) => cell === line[x])) return seen.text;
+    const text = styledCharsToString(line.filter(item => item !== undefined)).trimEnd();
+    rowsSeen[y] = { cells: line, text };
+    return text;
+}
 let shared = null;
 function sharedCaches() {
     if (!shared || shared.styledChars.size > ${CACHE_LIMIT} || shared.widths.size > ${CACHE_LIMIT} || shared.blockWidths.size > ${CACHE_LIMIT}) {

@@ -102,6 +102,33 @@ describe('patched modules agree with the originals', () => {
   });
 });
 
+describe("Ink's Output with caches and row texts kept across frames", () => {
+  type Output = { write(x: number, y: number, text: string, options: { transformers: unknown[] }): void; get(): { output: string; height: number } };
+  type OutputClass = new (size: { width: number; height: number }) => Output;
+  const outputFile = join(dirname(here.resolve('ink')), 'output.js');
+
+  test('draws every frame of a sequence exactly as the original', async () => {
+    const [Real, Fast] = [await load<OutputClass>(outputFile), await patched<OutputClass>(outputFile)];
+    // Frames that keep some lines, change others, move text and mix styles, wide and plain text.
+    const frames: [number, number, string][][] = [
+      [[0, 0, SAMPLES[3]], [2, 1, 'RS1 3k09'], [0, 3, SAMPLES[7]]],
+      [[0, 0, SAMPLES[3]], [2, 1, 'RS1 3k16'], [0, 3, SAMPLES[7]]],
+      [[1, 0, SAMPLES[3]], [2, 1, 'RS1 3k16'], [0, 2, SAMPLES[4]]],
+      [[0, 0, SAMPLES[2]], [0, 1, SAMPLES[13]], [0, 2, '\u001B[1m漢\u001B[22m ok'], [3, 3, SAMPLES[5]]],
+      [[0, 0, SAMPLES[2]], [0, 1, SAMPLES[13]], [0, 2, '\u001B[1m漢\u001B[22m ok'], [3, 3, SAMPLES[5]]],
+      [],
+    ];
+    for (const frame of frames) {
+      const [a, b] = [new Real({ width: 24, height: 4 }), new Fast({ width: 24, height: 4 })];
+      for (const [x, y, text] of frame) {
+        a.write(x, y, text, { transformers: [] });
+        b.write(x, y, text, { transformers: [] });
+      }
+      expect(b.get()).toEqual(a.get());
+    }
+  });
+});
+
 describe('conf with its validator loaded on first use', () => {
   type Store = { get(key: string): unknown; set(key: string, value: unknown): void };
   type ConfClass = new (options: object) => Store;
