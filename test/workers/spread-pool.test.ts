@@ -68,57 +68,55 @@ describe('spread worker pool', () => {
 
 // Reference for every check below: the single-thread, in-process engine (`runSpread`), which the
 // parallel runs must match exactly (each trial's random stream depends on (seed, trial) only).
+/** Runs `body` with a two-worker pool, closed afterwards whatever happens. */
+async function withPool(body: (pool: SpreadPool) => Promise<void>): Promise<void> {
+  const pool = new SpreadPool({ threads: 2, workerUrl: await buildSpreadWorker() });
+  try {
+    await body(pool);
+  } finally {
+    await pool.close();
+  }
+}
+
 describe('reusable spread pool', () => {
   test('two runs on different designs in one pool give the same reports as the engine in-process', async () => {
-    const pool = new SpreadPool({ threads: 2, workerUrl: await buildSpreadWorker() });
-    try {
+    await withPool(async (pool) => {
       const first = await pool.run(design(), { trials: 300, seed: 5, chunk: 40 });
       const second = await pool.run(eightStepDesign(), { trials: 200, seed: 6, chunk: 40 });
       expect(first.threads).toBe(2);
       expect(first.report).toEqual(runSpread(design(), { trials: 300, seed: 5 }));
       expect(second.report).toEqual(runSpread(eightStepDesign(), { trials: 200, seed: 6 }));
-    } finally {
-      await pool.close();
-    }
+    });
   });
 
   test('a cancelled run rejects at once and the next run on the same pool is complete and exact', async () => {
-    const pool = new SpreadPool({ threads: 2, workerUrl: await buildSpreadWorker() });
-    try {
+    await withPool(async (pool) => {
       const controller = new AbortController();
       const cancelled = pool.run(design(), { trials: 100_000, chunk: 50, signal: controller.signal, onProgress: () => controller.abort() });
       await expect(cancelled).rejects.toMatchObject({ name: 'AbortError' });
       const after = await pool.run(design(), { trials: 250, seed: 7, chunk: 50 });
       expect(after.report).toEqual(runSpread(design(), { trials: 250, seed: 7 }));
       expect(pool.liveWorkers).toBe(2);
-    } finally {
-      await pool.close();
-    }
+    });
   });
 
   test('a run cancelled while the workers start rejects, and the next run is exact', async () => {
-    const pool = new SpreadPool({ threads: 2, workerUrl: await buildSpreadWorker() });
-    try {
+    await withPool(async (pool) => {
       const controller = new AbortController();
       const cancelled = pool.run(design(), { trials: 5000, signal: controller.signal });
       setTimeout(() => controller.abort(), 1);
       await expect(cancelled).rejects.toMatchObject({ name: 'AbortError' });
       const after = await pool.run(design(), { trials: 100, seed: 13 });
       expect(after.report).toEqual(runSpread(design(), { trials: 100, seed: 13 }));
-    } finally {
-      await pool.close();
-    }
+    });
   });
 
   test('runs queued behind each other each get their own numbers', async () => {
-    const pool = new SpreadPool({ threads: 2, workerUrl: await buildSpreadWorker() });
-    try {
+    await withPool(async (pool) => {
       const [a, b] = await Promise.all([pool.run(design(), { trials: 150, seed: 8, chunk: 30 }), pool.run(design(), { trials: 150, seed: 9, chunk: 30 })]);
       expect(a.report).toEqual(runSpread(design(), { trials: 150, seed: 8 }));
       expect(b.report).toEqual(runSpread(design(), { trials: 150, seed: 9 }));
-    } finally {
-      await pool.close();
-    }
+    });
   });
 
   test('pools of one and two threads give the same report', async () => {
