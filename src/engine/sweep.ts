@@ -49,6 +49,11 @@ export interface SweepResult {
 export interface SweepOptions {
   /** Whether to record the segments; default true. Spread trials need only the flips and bands. */
   segments?: boolean;
+  /**
+   * Called for every flip (after the starting state is settled) instead of recording it in `flips`:
+   * no Flip objects and no pin voltages, the lean path of spread trials.
+   */
+  onFlip?: (element: number, to: boolean, x: number, direction: Direction) => void;
 }
 
 /** What one sweep carries through its walks and settles. */
@@ -60,6 +65,9 @@ interface SweepRun {
   segments: boolean;
   /** Key of the state the last settle returned. */
   key: number | string;
+  onFlip: SweepOptions['onFlip'];
+  /** False while the starting state is settled: those flips are not transitions of the circuit. */
+  recording: boolean;
 }
 
 /** Numerical zero for margins (V). */
@@ -104,11 +112,12 @@ export function sweep(solver: Solver, min: number, max: number, guess?: State, o
   const net = solver.net;
   const count = net.comparators.length + net.diodes.length;
   const result: SweepResult = { flips: [], segments: [], bands: [], initial: new Uint8Array(count) };
-  const run: SweepRun = { solver, out: result, seen: [], segments: options.segments !== false, key: 0 };
+  const run: SweepRun = { solver, out: result, seen: [], segments: options.segments !== false, key: 0, onFlip: options.onFlip, recording: false };
   let state: State = guess && guess.length === count ? guess.slice() : diodeGuess(solver, min);
   state = settle(run, state, min, 'up', max);
   // Settling the starting state is not a transition of the circuit: only later flips are trips.
   result.flips.length = 0;
+  run.recording = true;
   result.initial = state.slice();
   state = walk(run, state, min, max, 'up');
   walk(run, state, max, min, 'down');
@@ -210,6 +219,12 @@ function settle(run: SweepRun, start: State, x: number, dir: Direction, to: numb
     if (worst < 0) {
       run.key = key;
       return state;
+    }
+    if (run.onFlip) {
+      state[worst] = state[worst] ? 0 : 1;
+      key = toggledKey(key, state, worst);
+      if (run.recording) run.onFlip(worst, state[worst] === 1, x, dir);
+      continue;
     }
     let pinPlus = 0;
     let pinMinus = 0;

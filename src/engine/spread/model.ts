@@ -7,7 +7,7 @@ import type { Design } from '../design/types';
 import { buildNetwork } from '../network/build';
 import { Solver } from '../network/solve';
 import type { Network } from '../network/types';
-import { sweep } from '../sweep';
+import { type Direction, sweep } from '../sweep';
 import { type Parameter, perturbInto, spreadParameters, type SpreadOptions, valueCopy } from './perturb';
 
 /** A design ready for spread evaluation. Plain data: it can be rebuilt in a worker from the design. */
@@ -51,16 +51,17 @@ export function buildSpreadModel(design: Design, options: SpreadOptions = {}): S
 export function sweepTrips(design: Design, net: Network, rising: Float64Array, falling: Float64Array, offset = 0, model?: SpreadModel): boolean {
   const nc = net.comparators.length;
   if (model) model.solver.load(net);
-  const result = sweep(model?.solver ?? new Solver(net), design.quantity.min, design.quantity.max, model?.start, { segments: false });
   for (let k = 0; k < nc; k++) {
     rising[offset + k] = NaN;
     falling[offset + k] = NaN;
   }
-  for (const f of result.flips) {
-    if (f.element >= nc) continue;
-    const arr = f.direction === 'up' ? rising : falling;
-    if (Number.isNaN(arr[offset + f.element])) arr[offset + f.element] = f.x;
-  }
+  // Each comparator's first flip each way, taken as the sweep goes (no Flip records are kept).
+  const onFlip = (element: number, _to: boolean, x: number, direction: Direction) => {
+    if (element >= nc) return;
+    const arr = direction === 'up' ? rising : falling;
+    if (Number.isNaN(arr[offset + element])) arr[offset + element] = x;
+  };
+  const result = sweep(model?.solver ?? new Solver(net), design.quantity.min, design.quantity.max, model?.start, { segments: false, onFlip });
   return result.bands.length > 0;
 }
 
