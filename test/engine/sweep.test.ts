@@ -178,4 +178,22 @@ describe('sweep options', () => {
       expect({ ...lean, segments: full.segments }).toEqual(full);
     }
   });
+
+  test('onFlip is told every flip the record would hold, in order, and nothing is recorded', () => {
+    // Reference: the recorded flips of the same sweep; a four-step bar and a band with no stable state.
+    const oscillating = makeDesign({
+      string: [10e3, 10e3],
+      channels: [stepChannel('N', 1, 'T1', { seriesMinus: 10e3, feedback: { ohms: 100e3, to: 'minus' }, pullup: { ohms: 10e3, to: 'supply' } })],
+    });
+    for (const d of [fourStepDesign(470e3), oscillating]) {
+      const full = sweep(new Solver(buildNetwork(d)), d.quantity.min, d.quantity.max);
+      const told: { element: number; to: boolean; x: number; direction: string }[] = [];
+      const lean = sweep(new Solver(buildNetwork(d)), d.quantity.min, d.quantity.max, undefined, {
+        onFlip: (element, to, x, direction) => told.push({ element, to, x, direction }),
+      });
+      expect(lean.flips).toEqual([]);
+      expect(told).toEqual(full.flips.map(({ element, to, x, direction }) => ({ element, to, x, direction })));
+      expect(lean.bands).toEqual(full.bands);
+    }
+  });
 });
