@@ -2,6 +2,9 @@ import { choleskyEnvelope2, luSolve2 } from './factor';
 import { envelopeStarts, reverseCuthillMcKee } from './ordering';
 import { GND, type Network } from './types';
 
+/** Most solutions a solver keeps before it starts its cache afresh. */
+const CACHE_LIMIT = 4096;
+
 /** Conductance from every node to ground that keeps floating nodes defined (S). */
 export const GMIN = 1e-15;
 
@@ -145,9 +148,13 @@ export class Solver {
   private readonly cPlus: number[];
   private readonly cMinus: number[];
   private readonly cVos: number[];
-  private readonly cache = new Map<number | string, Solution>();
-  /** Solutions dropped by `load`, whose arrays the next solves refill instead of allocating. */
-  private readonly spare: Solution[] = [];
+  /**
+   * Solutions by state key, each tagged with the `load` it belongs to: after a `load` an entry of an
+   * earlier one is refilled in place when its state comes up again, so a spread run reuses the same
+   * few solutions trial after trial instead of emptying and refilling a map.
+   */
+  private readonly cache = new Map<number | string, { sol: Solution; generation: number }>();
+  private generation = 0;
 
   /** Prepares `net`; pass the layout of an identically wired network to skip recomputing it. */
   constructor(net: Network, layout: SolverLayout = solverLayout(net)) {
@@ -187,8 +194,7 @@ export class Solver {
    */
   load(net: Network): void {
     this.net = net;
-    for (const sol of this.cache.values()) this.spare.push(sol);
-    this.cache.clear();
+    this.generation++;
     const { nu, held0, held1, inj0, inj1, baseA, baseR0, baseR1 } = this;
     held0.fill(0);
     held1.fill(0);
@@ -237,10 +243,15 @@ export class Solver {
 
   /** `solve` for a caller that already has the state's `stateKey`. */
   solveKeyed(state: State, key: number | string): Solution {
-    const hit = this.cache.get(key);
-    if (hit) return hit;
-    const sol = this.factorAndSolve(state);
-    this.cache.set(key, sol);
+    const entry = this.cache.get(key);
+    if (entry && entry.generation === this.generation) return entry.sol;
+    const sol = this.factorAndSolve(state, entry?.sol);
+    if (entry) entry.generation = this.generation;
+    else {
+      // A circuit that visits very many states (a long cycle search) must not grow this without end.
+      if (this.cache.size >= CACHE_LIMIT) this.cache.clear();
+      this.cache.set(key, { sol, generation: this.generation });
+    }
     return sol;
   }
 
@@ -305,7 +316,8 @@ export class Solver {
     }
   }
 
-  private factorAndSolve(state: State): Solution {
+  /** Factors and solves `state`, into `reuse`'s arrays when given (a solution of an earlier `load`). */
+  private factorAndSolve(state: State, reuse?: Solution): Solution {
     const { size: n, nu, r0, r1 } = this;
     this.stampState(state);
     let ok = choleskyEnvelope2(this.work, nu, this.first, r0, r1);
@@ -313,8 +325,7 @@ export class Solver {
       this.stampState(state);
       ok = luSolve2(this.work, nu, r0, r1);
     }
-    // Refill a dropped solution when there is one: no new arrays in the steady state of a spread run.
-    const sol = this.spare.pop() ?? {
+    const sol = reuse ?? {
       v0: new Float64Array(n), v1: new Float64Array(n), da: new Float64Array(state.length), db: new Float64Array(state.length),
       ok, state: new Uint8Array(state.length),
     };
