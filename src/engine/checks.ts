@@ -1,7 +1,9 @@
 import type { Analysis, Finding, Severity } from './analysis-types';
 import type { SegmentStats } from './analyze';
-import { type Prepared, prepare, voltAt } from './prepare';
-import { firstFlip } from './sweep';
+import { buildNetwork } from './network/build';
+import { Solver } from './network/solve';
+import { type Prepared, voltAt } from './prepare';
+import { firstFlip, sweep } from './sweep';
 import { formatEng } from './values';
 
 /** Resistor power rating assumed when the design names none (W): common practice, no source. */
@@ -163,7 +165,7 @@ function checkSupplyShift(p: Prepared, a: Analysis, add: Add, fx: (x: number) =>
   const s = p.design.supply;
   if (s.kind !== 'fixed' || !(s.max > s.min)) return;
   const span = p.design.quantity.max - p.design.quantity.min;
-  const corners = [s.min, s.max].map((v) => analyzeTrips(prepare(p.design, { supplyVolts: v })));
+  const corners = [s.min, s.max].map((v) => tripsAtSupply(p, v));
   for (const c of a.channels) {
     let worst = 0;
     for (const corner of corners) {
@@ -182,10 +184,17 @@ function checkSupplyShift(p: Prepared, a: Analysis, add: Add, fx: (x: number) =>
 }
 
 /** First rising and falling trip point of each comparator from a prepared sweep. */
-function analyzeTrips(p: Prepared): Map<string, { rising: number | null; falling: number | null }> {
+/**
+ * Each channel's first rising and falling trip with the supply at `volts`. Only a source value
+ * changes, so the network is wired as `p.net` and its solver layout is reused.
+ */
+function tripsAtSupply(p: Prepared, volts: number): Map<string, { rising: number | null; falling: number | null }> {
+  const net = buildNetwork(p.design, { supplyVolts: volts });
+  const layout = net.nodes.length === p.net.nodes.length ? p.solver.layout : undefined;
+  const result = sweep(new Solver(net, layout), p.design.quantity.min, p.design.quantity.max, undefined, { segments: false });
   const out = new Map<string, { rising: number | null; falling: number | null }>();
-  p.net.comparators.forEach((c, k) => {
-    out.set(c.id, { rising: firstFlip(p.sweep, k, 'up')?.x ?? null, falling: firstFlip(p.sweep, k, 'down')?.x ?? null });
+  net.comparators.forEach((c, k) => {
+    out.set(c.id, { rising: firstFlip(result, k, 'up')?.x ?? null, falling: firstFlip(result, k, 'down')?.x ?? null });
   });
   return out;
 }

@@ -121,6 +121,8 @@ export function solverLayout(net: Network): SolverLayout {
  * reusing every buffer.
  */
 export class Solver {
+  /** The wiring-only part, to hand to a solver for an identically wired network. */
+  readonly layout: SolverLayout;
   net: Network;
   /** Node count. */
   readonly size: number;
@@ -159,6 +161,7 @@ export class Solver {
   /** Prepares `net`; pass the layout of an identically wired network to skip recomputing it. */
   constructor(net: Network, layout: SolverLayout = solverLayout(net)) {
     this.net = net;
+    this.layout = layout;
     const n = net.nodes.length;
     const nu = layout.nu;
     this.size = n;
