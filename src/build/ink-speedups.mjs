@@ -155,14 +155,13 @@ function graphemes(str) {
                     fullWidth: false,
                     styles: [],
                 });`, '                row.push(BLANK);'],
-        [`        const generatedOutput = output
-            .map(line => {
-            // See https://github.com/vadimdemedes/ink/pull/564#issuecomment-1637022742
-            const lineWithoutEmptyItems = line.filter(item => item !== undefined);
-            return styledCharsToString(lineWithoutEmptyItems).trimEnd();
-        })
-            .join('\\n');`, `        const generatedOutput = output.map(rowText).join('\\n');
-        rowsSeen.length = output.length;`],
+        ['            .map(line => {', '            .map((line, y) => {'],
+        [`            const lineWithoutEmptyItems = line.filter(item => item !== undefined);
+            return styledCharsToString(lineWithoutEmptyItems).trimEnd();`, '            return rowText(line, y);'],
+        [`        return {
+            output: generatedOutput,`, `        rowsSeen.length = output.length;
+        return {
+            output: generatedOutput,`],
       ]);
       return out && `${out}
 // One shared, frozen blank cell: cells are replaced, never changed, and freezing makes sure of it.
