@@ -149,4 +149,23 @@ describe('App', () => {
     expect(app.frame()).toContain('RS1 3k16 -> 3k24');
     app.unmount();
   });
+
+  it('a value and its Enter in one chunk are typed and accepted (a slow link batches keys)', async () => {
+    const app = renderApp();
+    await app.press(KEYS.enter, '\u0015');
+    await app.press('4k7\r');
+    await app.waitFor('RS1 3k09 -> 4k7', 2000);
+    expect(app.frame()).toContain('RS1 3k09 -> 4k7');
+    app.unmount();
+  });
+
+  it('a key that opens a prompt, the text and Enter in one chunk go to that prompt', async () => {
+    const app = renderApp();
+    // g opens the probe prompt, which starts empty; 13.1 V is inside the demo's 10 to 15 V range.
+    await app.press('g13.1\r');
+    await app.waitFor('Probe 13.10 V', 2000);
+    expect(app.frame()).toContain('Probe 13.10 V');
+    expect(app.frame()).not.toContain('probe battery voltage =');
+    app.unmount();
+  });
 });

@@ -1,5 +1,5 @@
 import { type Key, useInput } from 'ink';
-import { useRef } from 'react';
+import { useEffect, useReducer, useRef } from 'react';
 import { activeScope, findBinding, type KeyContext, keyName, whyDisabled } from '../keymap';
 import type { Controller } from './use-controller';
 
@@ -50,13 +50,45 @@ export function useKeys(options: KeysOptions): void {
     }
     controller.run(binding.action);
   };
-  useInput((input, key) => {
-    // Keys typed faster than a frame (or sent by a script) arrive as one chunk of text: outside a
-    // prompt each character is its own key.
-    if (activeScope(latest.current.ctx.state) !== 'prompt' && input.length > 1 && !key.ctrl && !key.meta && [...input].length > 1) {
-      for (const c of input) handle(c, { ...key, shift: /[A-Z]/.test(c) });
-      return;
+  // Keys typed faster than a frame, batched by a slow link or sent by a script arrive as one chunk.
+  // Its first key (in a prompt: its text up to a line end) is handled now and the rest after the
+  // next render, against the state that key made: "g13<Enter>" opens the probe prompt, types 13
+  // into it and accepts it.
+  const rest = useRef('');
+  const [, nextRender] = useReducer((n: number) => n + 1, 0);
+  const later = (text: string) => {
+    rest.current = text;
+    if (text) nextRender();
+  };
+  const feed = (input: string, key: Key) => {
+    const chars = [...input];
+    if (chars.length <= 1 || key.ctrl || key.meta) return handle(input, key);
+    const plain = (c: string): Key => ({ ...key, shift: /[A-Z]/.test(c) });
+    if (activeScope(latest.current.ctx.state) !== 'prompt') {
+      handle(chars[0], plain(chars[0]));
+      return later(chars.slice(1).join(''));
     }
-    handle(input, key);
+    const end = input.search(/[\r\n]/);
+    if (end < 0) return handle(input, key);
+    if (end > 0) {
+      handle(input.slice(0, end), key);
+      return later(input.slice(end));
+    }
+    handle('\r', plain('\r'));
+    later(input.slice(input.startsWith('\r\n') ? 2 : 1));
+  };
+  useEffect(() => {
+    const text = rest.current;
+    if (!text) return;
+    rest.current = '';
+    feed(text, { ...NO_KEY });
   });
+  useInput(feed);
 }
+
+/** An Ink key record with no special key or modifier set (plain characters). */
+const NO_KEY: Key = {
+  upArrow: false, downArrow: false, leftArrow: false, rightArrow: false, pageDown: false, pageUp: false, home: false, end: false,
+  return: false, escape: false, ctrl: false, shift: false, tab: false, backspace: false, delete: false, meta: false,
+  super: false, hyper: false, capsLock: false, numLock: false,
+};
