@@ -20,6 +20,7 @@ export function helpLines(ctx: KeyContext, ascii: boolean): HelpLine[] {
   }
   out.push({ kind: 'heading', text: 'Typing values' });
   out.push({ kind: 'binding', keys: '', text: 'resistors: 4k7, 4.7k, 4700, 4.7 kohm; volts: 2.5, 2V5, 2500 mV; percent: 1 %', why: null });
+  out.push({ kind: 'binding', keys: '', text: 'the value offered on opening is shown selected: typing replaces it, Backspace edits it', why: null });
   out.push({ kind: 'binding', keys: '', text: 'any other key while typing is text; Enter checks it and names what is wrong', why: null });
   return out;
 }

@@ -142,20 +142,21 @@ export function appReducer(s: AppState, a: AppAction): AppState {
     case 'edit-start': {
       const f = selectedField(s);
       if (!f) return s;
-      return { ...s, prompt: { kind: 'value', fieldId: f.id, label: `${f.label} =`, text: fieldText(f, s.design), error: null, recentIndex: -1 } };
+      const text = fieldText(f, s.design);
+      return { ...s, prompt: { kind: 'value', fieldId: f.id, label: `${f.label} =`, text, error: null, recentIndex: -1, offered: text !== '' } };
     }
     case 'prompt-open':
-      return { ...s, prompt: { kind: a.kind, label: a.label, text: a.text ?? '', error: null, recentIndex: -1, ...(a.format ? { format: a.format } : {}) } };
+      return { ...s, prompt: { kind: a.kind, label: a.label, text: a.text ?? '', error: null, recentIndex: -1, offered: !!a.text, ...(a.format ? { format: a.format } : {}) } };
     case 'prompt-type':
-      return s.prompt ? { ...s, prompt: { ...s.prompt, text: s.prompt.text + a.text, error: null } } : s;
+      return s.prompt ? { ...s, prompt: { ...s.prompt, text: (s.prompt.offered ? '' : s.prompt.text) + a.text, error: null, offered: false } } : s;
     case 'prompt-erase':
-      return s.prompt ? { ...s, prompt: { ...s.prompt, text: [...s.prompt.text].slice(0, -1).join(''), error: null } } : s;
+      return s.prompt ? { ...s, prompt: { ...s.prompt, text: [...s.prompt.text].slice(0, -1).join(''), error: null, offered: false } } : s;
     case 'prompt-clear':
-      return s.prompt ? { ...s, prompt: { ...s.prompt, text: '', error: null } } : s;
+      return s.prompt ? { ...s, prompt: { ...s.prompt, text: '', error: null, offered: false } } : s;
     case 'prompt-recent': {
       if (!s.prompt || a.recent.length === 0) return s;
       const i = Math.min(a.recent.length - 1, Math.max(-1, s.prompt.recentIndex + a.delta));
-      return { ...s, prompt: { ...s.prompt, recentIndex: i, text: i >= 0 ? a.recent[i] : s.prompt.text, error: null } };
+      return { ...s, prompt: { ...s.prompt, recentIndex: i, text: i >= 0 ? a.recent[i] : s.prompt.text, error: null, offered: false } };
     }
     case 'prompt-error':
       return s.prompt ? { ...s, prompt: { ...s.prompt, error: a.message } } : s;

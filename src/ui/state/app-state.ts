@@ -26,6 +26,11 @@ export interface PromptState {
   format?: ExportFormat;
   /** True while Enter waits for the unit reader to load (the text names a unit beyond its symbol). */
   awaitingUnits?: boolean;
+  /**
+   * The text is the one offered on opening (the current value, a suggested path), shown selected:
+   * the first typed character replaces it; Backspace or Ctrl+U edits it instead.
+   */
+  offered?: boolean;
 }
 
 /** A question that takes one key: quit with unsaved work, restore a draft, or which format to export. */

@@ -55,6 +55,16 @@ describe('app reducer', () => {
     expect(s.prompt).toBeNull();
   });
 
+  it('typing replaces the offered current value; Backspace edits it instead', () => {
+    const offered = run(start(), { type: 'edit-start' });
+    expect(offered.prompt).toMatchObject({ text: '3k09', offered: true });
+    // IEC 60062 RKM: 3k3 = 3300 ohms.
+    const typed = run(offered, { type: 'prompt-type', text: '3' }, { type: 'prompt-type', text: 'k3' }, { type: 'prompt-submit' });
+    expect(typed.design.string[0]).toBe(3300);
+    const edited = run(offered, { type: 'prompt-erase' }, { type: 'prompt-type', text: '1' });
+    expect(edited.prompt).toMatchObject({ text: '3k01', offered: false });
+  });
+
   it('accepts a value with units', () => {
     const s = run(start(), { type: 'edit-start' }, { type: 'prompt-clear' }, { type: 'prompt-type', text: '3.3 kohm' }, { type: 'prompt-submit' });
     expect(s.design.string[0]).toBe(3300);
