@@ -158,6 +158,8 @@ export class Solver {
    */
   private readonly cache = new Map<number | string, { sol: Solution; generation: number }>();
   private generation = 0;
+  /** Per node, the branches that end there (see `touching`). */
+  private readonly incident = new Map<number, { fixed: number[]; elements: number[] }>();
 
   /** Prepares `net`; pass the layout of an identically wired network to skip recomputing it. */
   constructor(net: Network, layout: SolverLayout = solverLayout(net)) {
@@ -266,12 +268,26 @@ export class Solver {
   sourceCurrent(sol: Solution, j: number): [number, number] {
     const node = this.net.vsources[j].node;
     const sums = [-this.inj0[node], -this.inj1[node]];
-    for (let k = 0; k < this.fixed.g.length; k++) addBranchCurrent(sums, this.fixed, k, node, sol.v0, sol.v1);
-    for (let k = 0; k < this.count; k++) {
+    const touch = this.touching(node);
+    for (const k of touch.fixed) addBranchCurrent(sums, this.fixed, k, node, sol.v0, sol.v1);
+    for (const k of touch.elements) {
       if (sol.state[k]) addBranchCurrent(sums, this.on, k, node, sol.v0, sol.v1);
       else if (this.hasOff[k]) addBranchCurrent(sums, this.off, k, node, sol.v0, sol.v1);
     }
     return [sums[0], sums[1]];
+  }
+
+  /** The fixed branches and the elements whose branches end at `node`, in index order (wiring only). */
+  private touching(node: number): { fixed: number[]; elements: number[] } {
+    let found = this.incident.get(node);
+    if (!found) {
+      const ends = (br: Branches, k: number) => br.a[k] === node || br.b[k] === node;
+      found = { fixed: [], elements: [] };
+      for (let k = 0; k < this.fixed.g.length; k++) if (ends(this.fixed, k)) found.fixed.push(k);
+      for (let k = 0; k < this.count; k++) if (ends(this.on, k) || (this.hasOff[k] && ends(this.off, k))) found.elements.push(k);
+      this.incident.set(node, found);
+    }
+    return found;
   }
 
   private inject(node: number, i0: number, i1: number): void {
