@@ -70,6 +70,14 @@ function bruteForceTrips(design: Design): Map<string, { up: number; down: number
   return trips;
 }
 
+/** One channel whose feedback goes to its own inverting input: a band with no stable state. */
+function oscillating(): Design {
+  return makeDesign({
+    string: [10e3, 10e3],
+    channels: [stepChannel('N', 1, 'T1', { seriesMinus: 10e3, feedback: { ohms: 100e3, to: 'minus' }, pullup: { ohms: 10e3, to: 'supply' } })],
+  });
+}
+
 describe('shared-string interaction', () => {
   const design = fourStepDesign(1e6);
   const exact = analyze(design);
@@ -167,11 +175,7 @@ describe('oscillation', () => {
 describe('sweep options', () => {
   test('without segments the flips, bands and starting state are the same (exact)', () => {
     // Reference: the same sweep with segments recorded. Both a plain four-step bar and a band with no stable state.
-    const oscillating = makeDesign({
-      string: [10e3, 10e3],
-      channels: [stepChannel('N', 1, 'T1', { seriesMinus: 10e3, feedback: { ohms: 100e3, to: 'minus' }, pullup: { ohms: 10e3, to: 'supply' } })],
-    });
-    for (const d of [fourStepDesign(470e3), oscillating]) {
+    for (const d of [fourStepDesign(470e3), oscillating()]) {
       const full = sweep(new Solver(buildNetwork(d)), d.quantity.min, d.quantity.max);
       const lean = sweep(new Solver(buildNetwork(d)), d.quantity.min, d.quantity.max, undefined, { segments: false });
       expect(lean.segments).toEqual([]);
@@ -181,11 +185,7 @@ describe('sweep options', () => {
 
   test('onFlip is told every flip the record would hold, in order, and nothing is recorded', () => {
     // Reference: the recorded flips of the same sweep; a four-step bar and a band with no stable state.
-    const oscillating = makeDesign({
-      string: [10e3, 10e3],
-      channels: [stepChannel('N', 1, 'T1', { seriesMinus: 10e3, feedback: { ohms: 100e3, to: 'minus' }, pullup: { ohms: 10e3, to: 'supply' } })],
-    });
-    for (const d of [fourStepDesign(470e3), oscillating]) {
+    for (const d of [fourStepDesign(470e3), oscillating()]) {
       const full = sweep(new Solver(buildNetwork(d)), d.quantity.min, d.quantity.max);
       const told: { element: number; to: boolean; x: number; direction: string }[] = [];
       const lean = sweep(new Solver(buildNetwork(d)), d.quantity.min, d.quantity.max, undefined, {
