@@ -63,6 +63,7 @@ export function App({ initial, services, noColor, onExit, size: fixedSize, onFlu
     state, dispatch, services, settings, setSettings, plotWidth,
     // Only read while the help overlay is open: wrapping every help line on each keystroke is a good part of a frame.
     helpLength: layout && state.overlay === 'help' ? helpScrollCount(ctx, theme.isAscii, layout.columns, overlayHeight) : 1,
+    helpPage: Math.max(1, overlayHeight - 2),
     flushDraft: autosave.flush,
     exit: (code) => {
       onExit(code);

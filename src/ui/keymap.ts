@@ -37,7 +37,7 @@ export type ActionName =
   | 'quit-save' | 'quit-discard' | 'quit-stay'
   | 'draft-restore' | 'draft-discard' | 'draft-later'
   | 'export-spice' | 'export-bom' | 'export-report' | 'export-json' | 'export-cancel'
-  | 'overlay-up' | 'overlay-down' | 'overlay-close' | 'setting-next' | 'setting-prev';
+  | 'overlay-up' | 'overlay-down' | 'overlay-page-up' | 'overlay-page-down' | 'overlay-close' | 'setting-next' | 'setting-prev';
 
 /** What `whyDisabled` may look at. */
 export interface KeyContext {
@@ -135,6 +135,8 @@ export const KEYMAP: readonly Binding[] = [
 
   { action: 'overlay-up', keys: [named('up')], scope: 'help', description: 'scroll up' },
   { action: 'overlay-down', keys: [named('down')], scope: 'help', description: 'scroll down' },
+  { action: 'overlay-page-up', keys: [named('pageUp')], scope: 'help', description: 'scroll up a page' },
+  { action: 'overlay-page-down', keys: [named('pageDown')], scope: 'help', description: 'scroll down a page' },
   { action: 'overlay-close', keys: [named('escape'), ch('?'), ch('q')], scope: 'help', description: 'close the help', hint: 'close' },
 
   { action: 'overlay-up', keys: [named('up')], scope: 'settings', description: 'previous setting', hint: 'setting', pairedWith: 'overlay-down' },

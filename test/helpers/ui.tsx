@@ -14,6 +14,7 @@ import type { AppState } from '../../src/ui/state/app-state';
 export const KEYS = {
   up: '\u001B[A', down: '\u001B[B', right: '\u001B[C', left: '\u001B[D', enter: '\r', escape: '\u001B',
   tab: '\t', shiftTab: '\u001B[Z', backspace: '\u007F', ctrlC: '\u0003', home: '\u001B[H', end: '\u001B[F',
+  pageUp: '\u001B[5~', pageDown: '\u001B[6~',
 } as const;
 
 /** The built-in demo design, resolved. */

@@ -128,6 +128,20 @@ describe('App', () => {
     app.unmount();
   });
 
+  it('scrolls the help a page at a time with PgDn and PgUp', async () => {
+    const app = renderApp();
+    await app.press('?');
+    const first = /Keys (\d+)-(\d+)\/(\d+)/.exec(app.frame());
+    expect(first?.[1]).toBe('1');
+    await app.press(KEYS.pageDown);
+    const paged = /Keys (\d+)-(\d+)\/(\d+)/.exec(app.frame());
+    // A page down starts where the first page ended, or a line before it.
+    expect(Number(paged?.[1])).toBeGreaterThanOrEqual(Number(first?.[2]) - 1);
+    await app.press(KEYS.pageUp);
+    expect(/Keys (\d+)-/.exec(app.frame())?.[1]).toBe('1');
+    app.unmount();
+  });
+
   it('asks for a larger window below 60x20', () => {
     const app = renderApp({ columns: 59, rows: 20 });
     expect(app.frame()).toContain('Enlarge the window');

@@ -29,6 +29,8 @@ export interface ControllerOptions {
   plotWidth: number;
   /** Scroll positions of the help overlay (its rows less those on screen, plus one). */
   helpLength: number;
+  /** Help lines on screen at once: PgUp and PgDn move by this many. */
+  helpPage: number;
   /** Writes any pending draft now. */
   flushDraft: () => void;
   /** Leaves the app with an exit code. */
@@ -153,6 +155,8 @@ export function useController(o: ControllerOptions): Controller {
         return say('draft kept for now; your next edit replaces it');
       case 'overlay-up': return dispatch({ type: 'overlay-move', delta: -1, count: s.overlay === 'help' ? o.helpLength : settingRows(o.settings).length });
       case 'overlay-down': return dispatch({ type: 'overlay-move', delta: 1, count: s.overlay === 'help' ? o.helpLength : settingRows(o.settings).length });
+      case 'overlay-page-up': return dispatch({ type: 'overlay-move', delta: -o.helpPage, count: o.helpLength });
+      case 'overlay-page-down': return dispatch({ type: 'overlay-move', delta: o.helpPage, count: o.helpLength });
       case 'overlay-close': return dispatch({ type: 'overlay', overlay: null });
       case 'setting-next': return changeSetting(1);
       case 'setting-prev': return changeSetting(-1);
