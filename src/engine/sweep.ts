@@ -92,13 +92,18 @@ function diodeGuess(solver: Solver, x: number): State {
   return state;
 }
 
-/** How badly element k's state is violated just past x in `dir` (0 when consistent). */
-function violation(a: number, b: number, x: number, sign: number): number {
-  const m = a + b * x;
-  const scale = TOL * (1 + Math.abs(a) + Math.abs(b * x));
+/**
+ * How badly an element's state is violated just past x in `dir` (0 when consistent), from its
+ * decision a + b·x (`Solution.da`, `db`) and whether it is set: its margin, positive when the state
+ * holds, is the decision for a set element and minus it for a clear one.
+ */
+function violation(a: number, b: number, set: boolean, x: number, sign: number): number {
+  const bx = b * x;
+  const m = set ? a + bx : -(a + bx);
+  const scale = TOL * (1 + Math.abs(a) + Math.abs(bx));
   if (m > scale) return 0;
   if (m < -scale) return -m;
-  return b * sign < 0 ? TOL * 1e-3 : 0;
+  return (set ? b : -b) * sign < 0 ? TOL * 1e-3 : 0;
 }
 
 /**
@@ -134,12 +139,13 @@ function walk(run: SweepRun, start: State, from: number, to: number, dir: Direct
   for (let step = 0; step < limit; step++) {
     const sol = solver.solveKeyed(state, key);
     let next = to;
+    const { da, db } = sol;
     for (let k = 0; k < state.length; k++) {
-      const flip = state[k] ? 1 : -1;
-      const a = sol.da[k] * flip;
-      const b = sol.db[k] * flip;
-      if (b * sign >= 0) continue;
-      const xz = -a / b;
+      // The margin, signed so that positive keeps element k as it is, is ±(da + db·x): it heads
+      // for its edge when its slope points against the sweep, and reaches it where da + db·x = 0.
+      const b = db[k];
+      if ((state[k] ? b : -b) * sign >= 0) continue;
+      const xz = -da[k] / b;
       // An element already at its edge was flipped by settle; only strictly later crossings count.
       if ((xz - x) * sign <= 0) continue;
       if ((xz - next) * sign < 0) next = xz;
@@ -209,8 +215,7 @@ function settle(run: SweepRun, start: State, x: number, dir: Direction, to: numb
     let worst = -1;
     let amount = 0;
     for (let k = 0; k < state.length; k++) {
-      const flip = state[k] ? 1 : -1;
-      const v = violation(da[k] * flip, db[k] * flip, x, sign);
+      const v = violation(da[k], db[k], state[k] !== 0, x, sign);
       if (v > amount) {
         amount = v;
         worst = k;

@@ -1,5 +1,5 @@
 /**
- * Node ordering for the envelope Cholesky factorisation: reverse Cuthill–McKee numbering keeps the
+ * Node ordering for the envelope LDLᵀ factorisation: reverse Cuthill–McKee numbering keeps the
  * rows' envelopes (first to last non-zero) narrow. A resistor string with pendant outputs then
  * factors in time proportional to its size instead of its cube.
  */

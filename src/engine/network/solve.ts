@@ -1,4 +1,4 @@
-import { choleskyEnvelope2, luSolve2 } from './factor';
+import { ldltEnvelope2, type Envelope, envelopeOf, envelopeToDense, luSolve2 } from './factor';
 import { envelopeStarts, reverseCuthillMcKee } from './ordering';
 import { GND, type Network } from './types';
 
@@ -32,23 +32,30 @@ export interface Solution {
 }
 
 /**
- * Two-terminal branches in flat arrays: current from a[k] to b[k] = g[k]·(V(a) − V(b) − e[k]).
- * Flat arrays keep the per-state work free of object lookups.
+ * Two-terminal branches in flat arrays: current from a[k] to b[k] = g[k]·(V(a) − V(b) − e[k]). The
+ * ends are kept both as nodes (`a`, `b`) and as indices into a solver's extended vectors (`ia`,
+ * `ib`, see `Solver`). Flat arrays keep the per-state work free of object lookups.
  */
 class Branches {
   readonly a: number[];
   readonly b: number[];
-  readonly g: number[];
-  readonly e: number[];
-  constructor(count: number) {
+  readonly ia: Int32Array;
+  readonly ib: Int32Array;
+  readonly g: Float64Array;
+  readonly e: Float64Array;
+  constructor(count: number, private readonly ext: (node: number) => number) {
     this.a = new Array<number>(count).fill(GND);
     this.b = new Array<number>(count).fill(GND);
-    this.g = new Array<number>(count).fill(0);
-    this.e = new Array<number>(count).fill(0);
+    this.ia = new Int32Array(count);
+    this.ib = new Int32Array(count);
+    this.g = new Float64Array(count);
+    this.e = new Float64Array(count);
   }
   set(k: number, a: number, b: number, g: number, e: number): void {
     this.a[k] = a;
     this.b[k] = b;
+    this.ia[k] = this.ext(a);
+    this.ib[k] = this.ext(b);
     this.g[k] = g;
     this.e[k] = e;
   }
@@ -79,16 +86,16 @@ class Arena {
 
 /**
  * The part of a solver that depends only on the network's wiring, not its values: which nodes are
- * unknowns, their envelope-friendly numbering and each row's envelope start. Networks that differ
- * only in element values (spread trials) share one layout.
+ * unknowns, their envelope-friendly numbering and the envelope storage of the reordered matrix.
+ * Networks that differ only in element values (spread trials) share one layout.
  */
 export interface SolverLayout {
   /** Unknown index of every node, or -1 when a source holds it. */
   slot: Int32Array;
   /** Number of unknowns. */
   nu: number;
-  /** Envelope start of every row of the reordered matrix. */
-  first: Int32Array;
+  /** Envelope storage of the reordered matrix (row starts and offsets). */
+  envelope: Envelope;
 }
 
 /** Computes the layout of `net` (see SolverLayout). */
@@ -110,16 +117,21 @@ export function solverLayout(net: Network): SolverLayout {
   // Renumber the unknowns so every state's matrix factors inside narrow row envelopes.
   const index = reverseCuthillMcKee(nu, edges);
   for (let k = 0; k < n; k++) if (slot[k] >= 0) slot[k] = index[slot[k]];
-  return { slot, nu, first: envelopeStarts(nu, edges, index) };
+  return { slot, nu, envelope: envelopeOf(envelopeStarts(nu, edges, index)) };
 }
 
 /**
  * A network prepared for repeated solves. Nodes held by a voltage source are known (affine in x),
  * so only the remaining nodes are unknowns; their conductance matrix is symmetric positive definite
- * and is solved by Cholesky factorisation inside row envelopes (pivoting LU as the fallback). The
+ * and is solved by LDLᵀ factorisation in envelope storage (pivoting LU as the fallback). The
  * state-independent part is stamped once; each state adds only its own branches. Solutions are
  * cached per state. `load` re-values the solver for an identically wired network (spread trials),
  * reusing every buffer.
+ *
+ * Voltages live in two extended vectors (constant and per-unit-x parts): the unknowns first (where
+ * the right-hand sides are stamped and solved in place), then the held nodes' source values, then a
+ * zero for ground. Every branch end and margin pin is an index into them, so no per-node test is
+ * left in the per-state work.
  */
 export class Solver {
   /** The wiring-only part, to hand to a solver for an identically wired network. */
@@ -127,30 +139,29 @@ export class Solver {
   net: Network;
   /** Node count. */
   readonly size: number;
-  private readonly slot: Int32Array;
   private readonly nu: number;
-  private readonly first: Int32Array;
+  private readonly env: Envelope;
   private readonly count: number;
+  /** Extended-vector index of every node (see the class comment). */
+  private readonly ix: Int32Array;
   private readonly arena: Arena;
-  private readonly held0: Float64Array;
-  private readonly held1: Float64Array;
+  private readonly ext0: Float64Array;
+  private readonly ext1: Float64Array;
+  private readonly inj0: Float64Array;
+  private readonly inj1: Float64Array;
   private readonly baseA: Float64Array;
   private readonly baseR0: Float64Array;
   private readonly baseR1: Float64Array;
-  private readonly inj0: Float64Array;
-  private readonly inj1: Float64Array;
   private readonly work: Float64Array;
-  private readonly r0: Float64Array;
-  private readonly r1: Float64Array;
   /** Fixed branches (resistors) and, per element, the branch it adds when set (on) or clear (off). */
   private readonly fixed: Branches;
   private readonly on: Branches;
   private readonly off: Branches;
-  private readonly hasOff: boolean[];
-  /** Comparator pins and offsets, flattened for the margin loop. */
-  private readonly cPlus: number[];
-  private readonly cMinus: number[];
-  private readonly cVos: number[];
+  private readonly hasOff: Uint8Array;
+  /** Each element's margin: ext[mPos] − ext[mNeg] − mOff (see Solution.da). */
+  private readonly mPos: Int32Array;
+  private readonly mNeg: Int32Array;
+  private readonly mOff: Float64Array;
   /**
    * Solutions by state key, each tagged with the `load` it belongs to: after a `load` an entry of an
    * earlier one is refilled in place when its state comes up again, so a spread run reuses the same
@@ -158,6 +169,10 @@ export class Solver {
    */
   private readonly cache = new Map<number | string, { sol: Solution; generation: number }>();
   private generation = 0;
+  /** The state `solveKeyed` answered last, and for which `load`. */
+  private lastKey: number | string = -1;
+  private lastSol: Solution | null = null;
+  private lastGeneration = -1;
   /** Per node, the branches that end there (see `touching`). */
   private readonly incident = new Map<number, { fixed: number[]; elements: number[] }>();
 
@@ -168,28 +183,40 @@ export class Solver {
     const n = net.nodes.length;
     const nu = layout.nu;
     this.size = n;
-    this.slot = layout.slot;
-    this.first = layout.first;
     this.nu = nu;
+    this.env = layout.envelope;
     this.count = net.comparators.length + net.diodes.length;
-    this.arena = new Arena(2 * nu * nu + 6 * nu + 4 * n);
-    this.held0 = this.arena.take(n);
-    this.held1 = this.arena.take(n);
+    const ix = new Int32Array(n);
+    let held = nu;
+    for (let k = 0; k < n; k++) ix[k] = layout.slot[k] >= 0 ? layout.slot[k] : held++;
+    this.ix = ix;
+    const ground = held;
+    const ext = (node: number) => (node === GND ? ground : ix[node]);
+    this.arena = new Arena(2 * (ground + 1) + 2 * n + 2 * this.env.size + 3 * nu + 6 * n + 4 * this.count);
+    this.ext0 = this.arena.take(ground + 1);
+    this.ext1 = this.arena.take(ground + 1);
     this.inj0 = this.arena.take(n);
     this.inj1 = this.arena.take(n);
-    this.baseA = this.arena.take(nu * nu);
-    this.work = this.arena.take(nu * nu);
+    this.baseA = this.arena.take(this.env.size);
+    this.work = this.arena.take(this.env.size);
     this.baseR0 = this.arena.take(nu);
     this.baseR1 = this.arena.take(nu);
-    this.r0 = this.arena.take(nu);
-    this.r1 = this.arena.take(nu);
-    this.fixed = new Branches(net.resistors.length);
-    this.on = new Branches(this.count);
-    this.off = new Branches(this.count);
-    this.hasOff = new Array<boolean>(this.count).fill(false);
-    this.cPlus = net.comparators.map((c) => c.plus);
-    this.cMinus = net.comparators.map((c) => c.minus);
-    this.cVos = new Array<number>(net.comparators.length).fill(0);
+    this.fixed = new Branches(net.resistors.length, ext);
+    this.on = new Branches(this.count, ext);
+    this.off = new Branches(this.count, ext);
+    this.hasOff = new Uint8Array(this.count);
+    this.mPos = new Int32Array(this.count);
+    this.mNeg = new Int32Array(this.count);
+    this.mOff = new Float64Array(this.count);
+    net.comparators.forEach((c, k) => {
+      this.mPos[k] = ext(c.minus);
+      this.mNeg[k] = ext(c.plus);
+    });
+    const nc = net.comparators.length;
+    net.diodes.forEach((d, k) => {
+      this.mPos[nc + k] = ext(d.anode);
+      this.mNeg[nc + k] = ext(d.cathode);
+    });
     this.load(net);
   }
 
@@ -201,45 +228,52 @@ export class Solver {
   load(net: Network): void {
     this.net = net;
     this.generation++;
-    const { nu, held0, held1, inj0, inj1, baseA, baseR0, baseR1 } = this;
-    held0.fill(0);
-    held1.fill(0);
+    const { nu, ext0, ext1, ix, inj0, inj1, baseA, baseR0, baseR1, env, on, off, fixed, mOff } = this;
+    ext0.fill(0);
+    ext1.fill(0);
     inj0.fill(0);
     inj1.fill(0);
     baseA.fill(0);
-    baseR0.fill(0);
-    baseR1.fill(0);
-    for (const s of net.vsources) {
-      held0[s.node] = s.c0;
-      held1[s.node] = s.c1;
+    const { vsources, isources, comparators, resistors, diodes } = net;
+    for (let j = 0; j < vsources.length; j++) {
+      const s = vsources[j];
+      ext0[ix[s.node]] = s.c0;
+      ext1[ix[s.node]] = s.c1;
     }
-    for (let i = 0; i < nu; i++) baseA[i * nu + i] = GMIN;
-    for (const s of net.isources) {
+    for (let i = 0; i < nu; i++) baseA[env.base[i] + i] = GMIN;
+    for (let j = 0; j < isources.length; j++) {
+      const s = isources[j];
       this.inject(s.from, -s.c0, -s.c1);
       this.inject(s.to, s.c0, s.c1);
     }
-    net.comparators.forEach((c, k) => {
+    const nc = comparators.length;
+    for (let k = 0; k < nc; k++) {
+      const c = comparators[k];
       this.inject(c.plus, c.ibPlus, 0);
       this.inject(c.minus, c.ibMinus, 0);
-      this.cVos[k] = c.vos;
-      this.on.set(k, c.out, GND, 1 / c.rsat, c.vsat0);
+      mOff[k] = c.vos;
+      on.set(k, c.out, GND, 1 / c.rsat, c.vsat0);
       if (c.pushPull) {
-        this.off.set(k, c.out, net.supply, 1 / c.rout, -c.vohDrop);
-        this.hasOff[k] = true;
+        off.set(k, c.out, net.supply, 1 / c.rout, -c.vohDrop);
+        this.hasOff[k] = 1;
       }
-    });
-    for (let k = 0; k < this.size; k++) {
-      const s = this.slot[k];
-      if (s < 0) continue;
-      baseR0[s] += inj0[k];
-      baseR1[s] += inj1[k];
     }
-    net.resistors.forEach((r, k) => {
-      this.fixed.set(k, r.a, r.b, 1 / r.ohms, 0);
-      this.stamp(baseA, baseR0, baseR1, this.fixed, k);
-    });
-    const nc = net.comparators.length;
-    net.diodes.forEach((d, k) => this.on.set(nc + k, d.anode, d.cathode, 1 / (d.rSeries + d.rdyn), d.knee));
+    for (let k = 0; k < this.size; k++) {
+      const s = ix[k];
+      if (s >= nu) continue;
+      baseR0[s] = inj0[k];
+      baseR1[s] = inj1[k];
+    }
+    for (let k = 0; k < resistors.length; k++) {
+      const r = resistors[k];
+      fixed.set(k, r.a, r.b, 1 / r.ohms, 0);
+      this.stamp(baseA, baseR0, baseR1, fixed, k);
+    }
+    for (let k = 0; k < diodes.length; k++) {
+      const d = diodes[k];
+      on.set(nc + k, d.anode, d.cathode, 1 / (d.rSeries + d.rdyn), d.knee);
+      mOff[nc + k] = d.knee;
+    }
   }
 
   /** Solves the network in `state`, from the cache when it has been solved before. */
@@ -249,16 +283,22 @@ export class Solver {
 
   /** `solve` for a caller that already has the state's `stateKey`. */
   solveKeyed(state: State, key: number | string): Solution {
-    const entry = this.cache.get(key);
-    if (entry && entry.generation === this.generation) return entry.sol;
-    const sol = this.factorAndSolve(state, entry?.sol);
-    if (entry) entry.generation = this.generation;
-    else {
+    // A sweep asks for the same state several times in a row (walk, settle, walk): skip the map then.
+    if (key === this.lastKey && this.lastGeneration === this.generation) return this.lastSol!;
+    let entry = this.cache.get(key);
+    if (entry === undefined) {
       // A circuit that visits very many states (a long cycle search) must not grow this without end.
       if (this.cache.size >= CACHE_LIMIT) this.cache.clear();
-      this.cache.set(key, { sol, generation: this.generation });
+      entry = { sol: this.factorAndSolve(state), generation: this.generation };
+      this.cache.set(key, entry);
+    } else if (entry.generation !== this.generation) {
+      this.factorAndSolve(state, entry.sol);
+      entry.generation = this.generation;
     }
-    return sol;
+    this.lastKey = key;
+    this.lastSol = entry.sol;
+    this.lastGeneration = this.generation;
+    return entry.sol;
   }
 
   /**
@@ -296,54 +336,57 @@ export class Solver {
     this.inj1[node] += i1;
   }
 
-  /** Adds branch k of `br` to the reduced system: held node voltages move to the right-hand sides. */
+  /**
+   * Adds branch k of `br` to the reduced system (matrix `m` in envelope storage, right-hand sides
+   * `r0`, `r1`): held node voltages (and ground's zero) move to the right-hand sides.
+   */
   private stamp(m: Float64Array, r0: Float64Array, r1: Float64Array, br: Branches, k: number): void {
-    const nu = this.nu;
-    const a = br.a[k];
-    const b = br.b[k];
+    const { nu, ext0, ext1 } = this;
+    const base = this.env.base;
+    const ia = br.ia[k];
+    const ib = br.ib[k];
     const g = br.g[k];
     const e = br.e[k];
-    const sa = a === GND ? -1 : this.slot[a];
-    const sb = b === GND ? -1 : this.slot[b];
-    if (sa >= 0) {
-      m[sa * nu + sa] += g;
-      r0[sa] += g * e;
-      if (sb >= 0) m[sa * nu + sb] -= g;
-      else if (b !== GND) {
-        r0[sa] += g * this.held0[b];
-        r1[sa] += g * this.held1[b];
-      }
+    if (ia < nu) {
+      m[base[ia] + ia] += g;
+      r0[ia] += g * e;
+      if (ib >= nu) {
+        r0[ia] += g * ext0[ib];
+        r1[ia] += g * ext1[ib];
+      } else if (ib < ia) m[base[ia] + ib] -= g;
     }
-    if (sb >= 0) {
-      m[sb * nu + sb] += g;
-      r0[sb] -= g * e;
-      if (sa >= 0) m[sb * nu + sa] -= g;
-      else if (a !== GND) {
-        r0[sb] += g * this.held0[a];
-        r1[sb] += g * this.held1[a];
-      }
+    if (ib < nu) {
+      m[base[ib] + ib] += g;
+      r0[ib] -= g * e;
+      if (ia >= nu) {
+        r0[ib] += g * ext0[ia];
+        r1[ib] += g * ext1[ia];
+      } else if (ia < ib) m[base[ib] + ia] -= g;
     }
   }
 
+  /** Stamps `state` into the working matrix and the unknowns' part of the extended vectors. */
   private stampState(state: State): void {
-    const { work, r0, r1 } = this;
+    const { work, ext0, ext1, baseR0, baseR1, nu } = this;
     work.set(this.baseA);
-    r0.set(this.baseR0);
-    r1.set(this.baseR1);
+    for (let i = 0; i < nu; i++) {
+      ext0[i] = baseR0[i];
+      ext1[i] = baseR1[i];
+    }
     for (let k = 0; k < state.length; k++) {
-      if (state[k]) this.stamp(work, r0, r1, this.on, k);
-      else if (this.hasOff[k]) this.stamp(work, r0, r1, this.off, k);
+      if (state[k]) this.stamp(work, ext0, ext1, this.on, k);
+      else if (this.hasOff[k]) this.stamp(work, ext0, ext1, this.off, k);
     }
   }
 
   /** Factors and solves `state`, into `reuse`'s arrays when given (a solution of an earlier `load`). */
   private factorAndSolve(state: State, reuse?: Solution): Solution {
-    const { size: n, nu, r0, r1 } = this;
+    const { size: n, nu, ext0, ext1, ix } = this;
     this.stampState(state);
-    let ok = choleskyEnvelope2(this.work, nu, this.first, r0, r1);
+    let ok = ldltEnvelope2(this.work, this.env, ext0, ext1);
     if (!ok) {
       this.stampState(state);
-      ok = luSolve2(this.work, nu, r0, r1);
+      ok = luSolve2(envelopeToDense(this.work, this.env), nu, ext0.subarray(0, nu), ext1.subarray(0, nu));
     }
     // New solutions take their arrays from the arena: a typed array of its own costs about ten times more.
     const { arena } = this;
@@ -353,21 +396,15 @@ export class Solver {
     };
     const { v0, v1, da, db } = sol;
     for (let k = 0; k < n; k++) {
-      const s = this.slot[k];
-      v0[k] = s < 0 ? this.held0[k] : r0[s];
-      v1[k] = s < 0 ? this.held1[k] : r1[s];
+      v0[k] = ext0[ix[k]];
+      v1[k] = ext1[ix[k]];
     }
-    const nc = this.cPlus.length;
-    for (let k = 0; k < nc; k++) {
-      const p = this.cPlus[k];
-      const q = this.cMinus[k];
-      da[k] = at(v0, q) - at(v0, p) - this.cVos[k];
-      db[k] = at(v1, q) - at(v1, p);
-    }
-    const on = this.on;
-    for (let k = nc; k < state.length; k++) {
-      da[k] = at(v0, on.a[k]) - at(v0, on.b[k]) - on.e[k];
-      db[k] = at(v1, on.a[k]) - at(v1, on.b[k]);
+    const { mPos, mNeg, mOff } = this;
+    for (let k = 0; k < state.length; k++) {
+      const p = mPos[k];
+      const q = mNeg[k];
+      da[k] = ext0[p] - ext0[q] - mOff[k];
+      db[k] = ext1[p] - ext1[q];
     }
     sol.ok = ok;
     sol.state.set(state);
