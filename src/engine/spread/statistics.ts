@@ -76,7 +76,53 @@ function percentileBySelection(a: Float64Array, p: number): number {
   return below + (h - lo) * (above - below);
 }
 
-/** Statistics of `values` (any order); null for an empty sample. */
+/** Most order statistics kept in a buffer by `percentileNearEnd`; beyond it, selection on a copy. */
+const END_BUFFER = 64;
+
+/**
+ * `percentileSorted` of `values` as if sorted, without reordering them. A percentile near either end
+ * (the ±3 sigma points) needs only the few smallest or largest values: one pass keeps them in a small
+ * sorted buffer, which for values in random order is about one comparison per value.
+ */
+function percentileNearEnd(values: Float64Array, p: number): number {
+  const n = values.length;
+  const h = (n - 1) * p;
+  const lo = Math.floor(h);
+  const hi = Math.min(n - 1, lo + 1);
+  if (hi + 1 <= END_BUFFER) {
+    // The hi + 1 smallest values, ascending: ranks 0..hi.
+    const buf = smallest(values, hi + 1, 1);
+    return buf[lo] + (h - lo) * (buf[hi] - buf[lo]);
+  }
+  if (n - lo <= END_BUFFER) {
+    // The n − lo largest values, descending: index i holds rank n − 1 − i.
+    const buf = smallest(values, n - lo, -1);
+    const below = buf[n - 1 - lo];
+    const above = buf[n - 1 - hi];
+    return below + (h - lo) * (above - below);
+  }
+  return percentileBySelection(values.slice(), p);
+}
+
+/** The `m` smallest values (sign 1, ascending) or largest (sign −1, descending) of `values`. */
+function smallest(values: Float64Array, m: number, sign: 1 | -1): Float64Array {
+  const buf = new Float64Array(m);
+  let count = 0;
+  for (let i = 0; i < values.length; i++) {
+    const v = sign * values[i];
+    if (count === m && !(v < buf[m - 1])) continue;
+    let j = count < m ? count++ : m - 1;
+    while (j > 0 && buf[j - 1] > v) {
+      buf[j] = buf[j - 1];
+      j--;
+    }
+    buf[j] = v;
+  }
+  if (sign < 0) for (let i = 0; i < m; i++) buf[i] = -buf[i];
+  return buf;
+}
+
+/** Statistics of `values` (any order, left as they are); null for an empty sample. */
 export function sampleStats(values: Float64Array): SampleStats | null {
   const n = values.length;
   if (n === 0) return null;
@@ -86,21 +132,20 @@ export function sampleStats(values: Float64Array): SampleStats | null {
   for (let i = 0; i < n; i++) {
     const v = values[i];
     sum += v;
-    min = Math.min(min, v);
-    max = Math.max(max, v);
+    if (v < min) min = v;
+    if (v > max) max = v;
   }
   const mean = sum / n;
   let ss = 0;
   for (let i = 0; i < n; i++) ss += (values[i] - mean) ** 2;
-  const work = Float64Array.from(values);
   return {
     count: n,
     min,
     max,
     mean,
     std: n > 1 ? Math.sqrt(ss / (n - 1)) : 0,
-    p00135: percentileBySelection(work, 0.00135),
-    p99865: percentileBySelection(work, 0.99865),
+    p00135: percentileNearEnd(values, 0.00135),
+    p99865: percentileNearEnd(values, 0.99865),
   };
 }
 

@@ -19,6 +19,18 @@ describe('sample statistics', () => {
     }
   });
 
+  test('large samples (percentiles far from either end) and sorted input give the sorted percentiles, exactly', () => {
+    const r = rng(23);
+    const big = Float64Array.from({ length: 120_000 }, () => r() - 0.5);
+    const ascending = Float64Array.from({ length: 3000 }, (_, i) => i / 7);
+    const descending = ascending.slice().reverse();
+    for (const values of [big, ascending, descending]) {
+      const stats = sampleStats(values)!;
+      const ref = sortedReference(values);
+      expect([stats.min, stats.max, stats.p00135, stats.p99865]).toEqual([ref.min, ref.max, ref.lo, ref.hi]);
+    }
+  });
+
   test('many equal values (a quantity with little spread) still give the sorted percentiles, exactly', () => {
     const r = rng(22);
     const values = Float64Array.from({ length: 5000 }, () => [1.5, 1.5, 1.5, 2, 1][Math.floor(r() * 5)]);
