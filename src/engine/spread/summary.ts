@@ -81,36 +81,10 @@ export function summarize(model: SpreadModel, block: TrialBlock, seed: number, w
   sweepTrips(design, model.net, nomRise, nomFall);
   const allowance = options.allowance ?? design.targets?.allowance ?? null;
   const bins = options.bins ?? 20;
-  const column = (source: Float64Array, k: number) => {
-    const out = new Float64Array(trials);
-    for (let t = 0; t < trials; t++) out[t] = source[t * n + k];
-    return out;
-  };
   const allOk = new Uint8Array(trials).fill(1);
-  const spread = (values: Float64Array, nominal: number, bound: Bound | null, inYield: boolean): QuantitySpread => {
-    const present = new Float64Array(trials);
-    let count = 0;
-    let within = 0;
-    for (let t = 0; t < trials; t++) {
-      const v = values[t];
-      if (!Number.isNaN(v)) present[count++] = v;
-      const ok = allowance !== null && !Number.isNaN(v) && !Number.isNaN(nominal) && Math.abs(v - nominal) <= allowance;
-      if (ok) within++;
-      else if (inYield) allOk[t] = 0;
-    }
-    const sample = present.subarray(0, count);
-    return {
-      nominal: Number.isNaN(nominal) ? null : nominal,
-      stats: sampleStats(sample),
-      missing: trials - count,
-      histogram: histogram(sample, bins),
-      bound,
-      yield: allowance === null || trials === 0 ? null : within / trials,
-    };
-  };
   const channels: ChannelSpread[] = model.channels.map((id, k) => {
-    const rise = column(block.rising, k);
-    const fall = column(block.falling, k);
+    const rise = column(block.rising, n, k, trials);
+    const fall = column(block.falling, n, k, trials);
     const hyst = new Float64Array(trials);
     let below = 0;
     for (let t = 0; t < trials; t++) {
@@ -122,20 +96,12 @@ export function summarize(model: SpreadModel, block: TrialBlock, seed: number, w
     return {
       id,
       label: design.channels.find((c) => c.id === id)?.label ?? id,
-      rising: spread(rise, nomRise[k], wc?.rising ?? null, true),
-      falling: spread(fall, nomFall[k], wc?.falling ?? null, true),
-      hysteresis: { ...spread(hyst, nomRise[k] - nomFall[k], wc?.hysteresis ?? null, false), belowNoise: trials ? below / trials : 0 },
+      rising: quantitySpread(rise, nomRise[k], wc?.rising ?? null, allowance, bins, allOk),
+      falling: quantitySpread(fall, nomFall[k], wc?.falling ?? null, allowance, bins, allOk),
+      hysteresis: { ...quantitySpread(hyst, nomRise[k] - nomFall[k], wc?.hysteresis ?? null, allowance, bins, null), belowNoise: trials ? below / trials : 0 },
     };
   });
-  const risk = (lo: number, hi: number): OrderRisk => {
-    let bad = 0;
-    for (let t = 0; t < trials; t++) {
-      const r = block.rising[t * n + hi] <= block.rising[t * n + lo];
-      const f = block.falling[t * n + hi] <= block.falling[t * n + lo];
-      if (r || f) bad++;
-    }
-    return { lower: model.channels[lo], upper: model.channels[hi], probability: trials ? bad / trials : 0 };
-  };
+  const risk = ([lo, hi]: [number, number]) => orderRisk(block, model.channels, lo, hi);
   const { order, windows } = pairs(model, nomRise);
   let chatter = 0;
   block.chatter.forEach((c) => (chatter += c));
@@ -145,12 +111,60 @@ export function summarize(model: SpreadModel, block: TrialBlock, seed: number, w
     noise: design.quantity.noise,
     allowance,
     channels,
-    order: order.map(([a, b]) => risk(a, b)),
-    windows: windows.map(([a, b]) => risk(a, b)),
+    order: order.map(risk),
+    windows: windows.map(risk),
     yield: allowance === null || trials === 0 ? null : allOk.reduce((a, v) => a + v, 0) / trials,
     chatter: trials ? chatter / trials : 0,
     worstCase: worst,
   };
+}
+
+/** Channel k of the channel-major trial array `source` (n channels per trial). */
+function column(source: Float64Array, n: number, k: number, trials: number): Float64Array {
+  const out = new Float64Array(trials);
+  for (let t = 0; t < trials; t++) out[t] = source[t * n + k];
+  return out;
+}
+
+/**
+ * Spread of one quantity over the trials. Trials outside the allowance (or missing) are cleared in
+ * `allOk`, unless it is null (hysteresis does not count towards the yield).
+ */
+function quantitySpread(values: Float64Array, nominal: number, bound: Bound | null, allowance: number | null, bins: number, allOk: Uint8Array | null): QuantitySpread {
+  const trials = values.length;
+  const present = new Float64Array(trials);
+  let count = 0;
+  let within = 0;
+  const judged = allowance !== null && !Number.isNaN(nominal);
+  for (let t = 0; t < trials; t++) {
+    const v = values[t];
+    if (!Number.isNaN(v)) present[count++] = v;
+    const ok = judged && !Number.isNaN(v) && Math.abs(v - nominal) <= allowance;
+    if (ok) within++;
+    else if (allOk !== null) allOk[t] = 0;
+  }
+  const sample = present.subarray(0, count);
+  return {
+    nominal: Number.isNaN(nominal) ? null : nominal,
+    stats: sampleStats(sample),
+    missing: trials - count,
+    histogram: histogram(sample, bins),
+    bound,
+    yield: allowance === null || trials === 0 ? null : within / trials,
+  };
+}
+
+/** How often channel `hi`'s rising or falling trip is at or below channel `lo`'s. */
+function orderRisk(block: TrialBlock, ids: string[], lo: number, hi: number): OrderRisk {
+  const n = ids.length;
+  const trials = block.to - block.from;
+  let bad = 0;
+  for (let t = 0; t < trials; t++) {
+    const r = block.rising[t * n + hi] <= block.rising[t * n + lo];
+    const f = block.falling[t * n + hi] <= block.falling[t * n + lo];
+    if (r || f) bad++;
+  }
+  return { lower: ids[lo], upper: ids[hi], probability: trials ? bad / trials : 0 };
 }
 
 /** Neighbouring channels by nominal rising trip, and wired-OR pairs, as [lower, upper] indices. */
