@@ -1,4 +1,4 @@
-import { ldltEnvelope2, type Envelope, envelopeOf, envelopeToDense, luSolve2 } from './factor';
+import { type Envelope, envelopeOf, envelopeToDense, luSolve2, solveEnvelope2 } from './factor';
 import { envelopeStarts, reverseCuthillMcKee } from './ordering';
 import { GND, type Network } from './types';
 
@@ -383,7 +383,7 @@ export class Solver {
   private factorAndSolve(state: State, reuse?: Solution): Solution {
     const { size: n, nu, ext0, ext1, ix } = this;
     this.stampState(state);
-    let ok = ldltEnvelope2(this.work, this.env, ext0, ext1);
+    let ok = solveEnvelope2(this.work, this.env, ext0, ext1);
     if (!ok) {
       this.stampState(state);
       ok = luSolve2(envelopeToDense(this.work, this.env), nu, ext0.subarray(0, nu), ext1.subarray(0, nu));
