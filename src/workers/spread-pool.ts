@@ -12,7 +12,7 @@
 import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import type { Design } from '../engine/design/types';
-import { buildSpreadModel, DEFAULT_TRIALS, joinBlocks, type SpreadReport, type SpreadRunOptions, summarize } from '../engine/spread';
+import { buildSpreadModel, DEFAULT_TRIALS, joinBlocks, type SpreadModel, type SpreadReport, type SpreadRunOptions, summarize } from '../engine/spread';
 import { abortError, DEFAULT_CHUNK, jobHere, type Outcome, pickModelOptions, type RunControl, runHere, spreadJobs } from './spread-jobs';
 import { WorkerSet } from './worker-set';
 
@@ -76,6 +76,8 @@ export class SpreadPool {
   private readonly helpHere: boolean;
   private queue: Promise<void> = Promise.resolve();
   private isClosed = false;
+  /** The model of the last run and the key of the design and options it was built from. */
+  private last: { key: string; model: SpreadModel } | null = null;
 
   constructor(options: SpreadPoolOptions = {}) {
     const threads = Math.max(0, Math.floor(options.threads ?? availableParallelism()));
@@ -129,12 +131,18 @@ export class SpreadPool {
     // Workers boot while this thread builds the model.
     const starting = this.start();
     starting.catch(() => {});
-    const model = buildSpreadModel(design, o);
+    const options = pickModelOptions(o);
+    // A run of the same design with the same model options (another seed, more trials) keeps the
+    // last run's model here and in every worker (see `key`): nothing is rebuilt, and the compiled
+    // code, tuned to that model's objects, stays as it is.
+    const key = JSON.stringify([design, options]);
+    if (this.last?.key !== key) this.last = { key, model: buildSpreadModel(design, o) };
+    const model = this.last.model;
     const seed = o.seed ?? 1;
     const trials = o.trials ?? DEFAULT_TRIALS;
     const workers = this.workers;
     const jobs = spreadJobs(workers?.nextModel() ?? 0, trials, seed, o.chunk ?? DEFAULT_CHUNK, o.worstCase !== false);
-    const message = { kind: 'model' as const, model: jobs[0]?.model ?? 0, design, options: pickModelOptions(o) };
+    const message = { kind: 'model' as const, model: jobs[0]?.model ?? 0, key, design, options };
     let outcome: Outcome;
     let used = 0;
     if (workers && this.helpHere) {

@@ -13,8 +13,13 @@ export type SpreadModelOptions = SpreadOptions & WorstCaseOptions;
 /** Sets up the model a run's jobs refer to; the worker keeps the latest one. */
 export interface SpreadModelMessage {
   kind: 'model';
-  /** Model id, unique within a pool. */
+  /** Model id, unique within a pool and to one run (replies of a cancelled run are told apart by it). */
   model: number;
+  /**
+   * The design and options as one text: a worker whose model was built from the same text keeps it
+   * under the new id instead of building it again.
+   */
+  key: string;
   design: Design;
   options: SpreadModelOptions;
 }

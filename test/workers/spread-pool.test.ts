@@ -24,8 +24,9 @@ describe('spread worker pool', () => {
 
   test('a one-off run does not wait for its workers: this thread starts at once and they join', async () => {
     const workerUrl = await buildSpreadWorker();
-    const base = runSpread(design(), { trials: 4000, seed: 5 });
-    const run = await runSpreadParallel(design(), { trials: 4000, seed: 5, threads: 1, chunk: 100, workerUrl });
+    // Enough trials that this thread is still busy when the worker comes up (about 0.1 s).
+    const base = runSpread(design(), { trials: 16_000, seed: 5 });
+    const run = await runSpreadParallel(design(), { trials: 16_000, seed: 5, threads: 1, chunk: 100, workerUrl });
     expect(run.threads).toBe(1);
     expect(run.report).toEqual(base);
   });
@@ -86,6 +87,21 @@ describe('reusable spread pool', () => {
       expect(first.threads).toBe(2);
       expect(first.report).toEqual(runSpread(design(), { trials: 300, seed: 5 }));
       expect(second.report).toEqual(runSpread(eightStepDesign(), { trials: 200, seed: 6 }));
+    });
+  });
+
+  test('runs of one design keep its model until the design or a model option changes', async () => {
+    await withPool(async (pool) => {
+      const a = await pool.run(design(), { trials: 120, seed: 5, chunk: 40 });
+      const wider = await pool.run(design(), { trials: 120, seed: 5, chunk: 40, resistorTolerance: 0.05 });
+      const edited = { ...design(), resistorTolerance: 0.02 };
+      const b = await pool.run(edited, { trials: 120, seed: 5, chunk: 40 });
+      const again = await pool.run(design(), { trials: 120, seed: 5, chunk: 40 });
+      expect(a.report).toEqual(runSpread(design(), { trials: 120, seed: 5 }));
+      expect(wider.report).toEqual(runSpread(design(), { trials: 120, seed: 5, resistorTolerance: 0.05 }));
+      expect(wider.report).not.toEqual(a.report);
+      expect(b.report).toEqual(runSpread(edited, { trials: 120, seed: 5 }));
+      expect(again.report).toEqual(a.report);
     });
   });
 
