@@ -2,7 +2,6 @@
  * Factorisations that solve for two right-hand sides at once (the constant part and the per-unit-x
  * part of an affine solution): envelope LDLᵀ, and dense pivoting LU as its fallback.
  */
-import { type EnvelopeKernel, kernelFor } from './kernel';
 
 /**
  * Where each row of a symmetric matrix sits in envelope (skyline) storage: row i keeps its columns
@@ -12,24 +11,6 @@ export interface Envelope {
   first: Int32Array;
   base: Int32Array;
   size: number;
-  /** Factorisations of this shape so far, counted until it gets its kernel (see `solveEnvelope2`). */
-  uses: number;
-  /** The shape's straight-line kernel once it is hot; null while it is not (or too large for one). */
-  kernel: EnvelopeKernel | null;
-}
-
-/** Factorisations of one shape after which it is written out as a kernel (spread runs reach it at once). */
-export const KERNEL_AFTER = 64;
-
-/**
- * `ldltEnvelope2`, through the shape's straight-line kernel once the shape has been factored
- * `KERNEL_AFTER` times: same operations, same order, same bits; one-off analyses never pay for
- * writing and compiling the code.
- */
-export function solveEnvelope2(a: Float64Array, env: Envelope, b0: Float64Array, b1: Float64Array): boolean {
-  if (env.kernel) return env.kernel(a, b0, b1);
-  if (++env.uses === KERNEL_AFTER) env.kernel = kernelFor(env);
-  return ldltEnvelope2(a, env, b0, b1);
 }
 
 /** The envelope storage plan for rows that start at `first` (see Envelope). */
@@ -40,7 +21,7 @@ export function envelopeOf(first: Int32Array): Envelope {
     base[i] = size - first[i];
     size += i - first[i] + 1;
   }
-  return { first, base, size, uses: 0, kernel: null };
+  return { first, base, size };
 }
 
 /** The full row-major n×n symmetric matrix of the envelope-stored `a` (for the pivoting fallback). */

@@ -1,76 +1,132 @@
 /**
- * Straight-line LDLᵀ for one envelope shape. `ldltEnvelope2` spends most of its time on loop
- * control: on a string with pendant outputs most inner loops run zero to two times. For a shape that
- * is factored many times (every trial of a spread run) the same operations, in the same order, are
- * written out as code with every index a constant, which runs about two and a half times faster and
- * gives bit-identical results. Only indices go into the code, never values or names.
+ * Straight-line code for one wiring. A solver's per-state work (stamp the state, factor by envelope
+ * LDLᵀ, solve, read the node voltages and margins) spends most of its time on loop control and
+ * index lookups: on a string with pendant outputs most inner loops run zero to two times. For a
+ * wiring solved many times (every trial of a spread run) the same operations, in the same order, are
+ * written out with every index a constant. That runs several times faster and gives bit-identical
+ * results. Only integers (indices) go into the code, never values or names.
  */
 import type { Envelope } from './factor';
 
-/** Factors the envelope-stored `a` and solves for `b0`, `b1` in place, as `ldltEnvelope2` does. */
-export type EnvelopeKernel = (a: Float64Array, b0: Float64Array, b1: Float64Array) => boolean;
+/** The wiring a kernel is written for: every index it uses (see `Solver`). */
+export interface KernelPlan {
+  env: Envelope;
+  /** Unknowns: the first `nu` entries of the extended vectors. */
+  nu: number;
+  /** Extended-vector index of every node. */
+  ix: Int32Array;
+  /** Each element's branch when set (on) and, where `hasOff`, when clear (off): extended-vector ends. */
+  onA: Int32Array;
+  onB: Int32Array;
+  offA: Int32Array;
+  offB: Int32Array;
+  hasOff: Uint8Array;
+  /** Each element's margin pins (extended-vector indices). */
+  mPos: Int32Array;
+  mNeg: Int32Array;
+}
 
-/** Most inner-loop steps a kernel is written for; a larger shape keeps the loops (its code would be huge). */
-export const KERNEL_STEP_LIMIT = 6000;
+/** The arrays a kernel works on, all owned by the solver. */
+export interface KernelArrays {
+  /** Working matrix (envelope storage) and the state-independent matrix it starts from. */
+  work: Float64Array;
+  baseA: Float64Array;
+  /** Extended vectors (constant and per-unit-x parts) and the unknowns' state-independent right-hand sides. */
+  ext0: Float64Array;
+  ext1: Float64Array;
+  baseR0: Float64Array;
+  baseR1: Float64Array;
+  onG: Float64Array;
+  onE: Float64Array;
+  offG: Float64Array;
+  offE: Float64Array;
+  mOff: Float64Array;
+}
 
-/** Kernels by shape, shared by every solver (a new solver of a known shape starts with warm code). */
-const kernels = new Map<string, EnvelopeKernel | null>();
+/**
+ * Stamps `state`, factors, solves, and writes the node voltages (v0, v1) and margins (da, db), as the
+ * solver's loops do. Returns false, before writing any output, when the matrix is not positive
+ * definite (the caller then takes the pivoting fallback).
+ */
+export type SolveKernel = (state: Uint8Array, arrays: KernelArrays, v0: Float64Array, v1: Float64Array, da: Float64Array, db: Float64Array) => boolean;
+
+/** Most statements a kernel is written with; a larger wiring keeps the loops (its code would be huge). */
+export const KERNEL_STATEMENT_LIMIT = 20_000;
+
+/** Kernels by wiring, shared by every solver (a new solver of a known wiring starts with warm code). */
+const kernels = new Map<string, SolveKernel | null>();
 const KERNEL_CACHE_LIMIT = 64;
 
-/** The kernel for `env`'s shape, or null when the shape is too large to write out. */
-export function kernelFor(env: Envelope): EnvelopeKernel | null {
-  const key = env.first.join(',');
+/** The kernel for `plan`, or null when the wiring is too large to write out. */
+export function kernelFor(plan: KernelPlan): SolveKernel | null {
+  const key = [plan.env.first, plan.ix, plan.onA, plan.onB, plan.offA, plan.offB, plan.hasOff, plan.mPos, plan.mNeg].map((a) => a.join(',')).join(';');
   let kernel = kernels.get(key);
   if (kernel === undefined) {
     if (kernels.size >= KERNEL_CACHE_LIMIT) kernels.clear();
-    kernel = steps(env) <= KERNEL_STEP_LIMIT ? writeKernel(env) : null;
+    const code = writeKernel(plan);
+    kernel = code.length <= KERNEL_STATEMENT_LIMIT ? (new Function('state', 'arrays', 'v0', 'v1', 'da', 'db', code.join('\n')) as SolveKernel) : null;
     kernels.set(key, kernel);
   }
   return kernel;
 }
 
-/** Inner-loop steps of one factor-and-solve of `env`'s shape. */
-function steps(env: Envelope): number {
-  const { first } = env;
-  let count = 0;
-  for (let i = 0; i < first.length; i++) {
-    for (let j = first[i]; j < i; j++) count += 2 + Math.max(0, j - Math.max(first[i], first[j]));
-    count += 3 * (i - first[i]) + 2;
-  }
-  return count;
-}
-
-/** Writes out `ldltEnvelope2` for `env`'s shape: the same statements in the same order. */
-function writeKernel(env: Envelope): EnvelopeKernel {
+/** The statements of `plan`'s kernel, mirroring `Solver.stampState`, `ldltEnvelope2` and the read-out. */
+function writeKernel(plan: KernelPlan): string[] {
+  const { env, nu, ix, mPos, mNeg } = plan;
   const { first, base } = env;
-  const n = first.length;
-  const code: string[] = ['let d, w, l;'];
-  for (let i = 0; i < n; i++) {
+  const code = ['const { work: m, baseA, ext0: r0, ext1: r1, baseR0, baseR1, onG, onE, offG, offE, mOff } = arrays;', 'let g, e, d, w, l;', 'm.set(baseA);'];
+  for (let i = 0; i < nu; i++) code.push(`r0[${i}] = baseR0[${i}];`, `r1[${i}] = baseR1[${i}];`);
+  // Solver.stamp for a branch with ends ia, ib (held ends and ground move to the right-hand sides).
+  const stamp = (ia: number, ib: number) => {
+    if (ia < nu) {
+      code.push(`m[${base[ia] + ia}] += g;`, `r0[${ia}] += g * e;`);
+      if (ib >= nu) code.push(`r0[${ia}] += g * r0[${ib}];`, `r1[${ia}] += g * r1[${ib}];`);
+      else if (ib < ia) code.push(`m[${base[ia] + ib}] -= g;`);
+    }
+    if (ib < nu) {
+      code.push(`m[${base[ib] + ib}] += g;`, `r0[${ib}] -= g * e;`);
+      if (ia >= nu) code.push(`r0[${ib}] += g * r0[${ia}];`, `r1[${ib}] += g * r1[${ia}];`);
+      else if (ia < ib) code.push(`m[${base[ib] + ia}] -= g;`);
+    }
+  };
+  for (let k = 0; k < plan.onA.length; k++) {
+    code.push(`if (state[${k}]) {`, `g = onG[${k}];`, `e = onE[${k}];`);
+    stamp(plan.onA[k], plan.onB[k]);
+    if (plan.hasOff[k]) {
+      code.push('} else {', `g = offG[${k}];`, `e = offE[${k}];`);
+      stamp(plan.offA[k], plan.offB[k]);
+    }
+    code.push('}');
+  }
+  // ldltEnvelope2, statement for statement.
+  for (let i = 0; i < nu; i++) {
     const ri = base[i];
     const fi = first[i];
     for (let j = fi; j < i; j++) {
-      const rj = base[j];
       let terms = '';
-      for (let k = Math.max(fi, first[j]); k < j; k++) terms += ` - a[${ri + k}] * a[${rj + k}]`;
-      if (terms) code.push(`a[${ri + j}] = a[${ri + j}]${terms};`);
+      for (let k = Math.max(fi, first[j]); k < j; k++) terms += ` - m[${ri + k}] * m[${base[j] + k}]`;
+      if (terms) code.push(`m[${ri + j}] = m[${ri + j}]${terms};`);
     }
-    code.push(`d = a[${ri + i}];`);
-    for (let j = fi; j < i; j++) code.push(`w = a[${ri + j}]; l = w * a[${base[j] + j}]; a[${ri + j}] = l; d -= w * l;`);
-    code.push(`if (!(d > 0)) return false;`, `a[${ri + i}] = 1 / d;`);
+    code.push(`d = m[${ri + i}];`);
+    for (let j = fi; j < i; j++) code.push(`w = m[${ri + j}];`, `l = w * m[${base[j] + j}];`, `m[${ri + j}] = l;`, 'd -= w * l;');
+    code.push('if (!(d > 0)) return false;', `m[${ri + i}] = 1 / d;`);
   }
-  for (let i = 0; i < n; i++) {
+  for (let i = 0; i < nu; i++) {
     let t0 = '';
     let t1 = '';
     for (let k = first[i]; k < i; k++) {
-      t0 += ` - a[${base[i] + k}] * b0[${k}]`;
-      t1 += ` - a[${base[i] + k}] * b1[${k}]`;
+      t0 += ` - m[${base[i] + k}] * r0[${k}]`;
+      t1 += ` - m[${base[i] + k}] * r1[${k}]`;
     }
-    if (t0) code.push(`b0[${i}] = b0[${i}]${t0};`, `b1[${i}] = b1[${i}]${t1};`);
+    if (t0) code.push(`r0[${i}] = r0[${i}]${t0};`, `r1[${i}] = r1[${i}]${t1};`);
   }
-  for (let i = 0; i < n; i++) code.push(`b0[${i}] *= a[${base[i] + i}];`, `b1[${i}] *= a[${base[i] + i}];`);
-  for (let i = n - 1; i >= 0; i--) {
-    for (let k = first[i]; k < i; k++) code.push(`b0[${k}] -= a[${base[i] + k}] * b0[${i}];`, `b1[${k}] -= a[${base[i] + k}] * b1[${i}];`);
+  for (let i = 0; i < nu; i++) code.push(`r0[${i}] *= m[${base[i] + i}];`, `r1[${i}] *= m[${base[i] + i}];`);
+  for (let i = nu - 1; i >= 0; i--) {
+    for (let k = first[i]; k < i; k++) code.push(`r0[${k}] -= m[${base[i] + k}] * r0[${i}];`, `r1[${k}] -= m[${base[i] + k}] * r1[${i}];`);
   }
+  // The read-out of Solver.factorAndSolve.
+  for (let k = 0; k < ix.length; k++) code.push(`v0[${k}] = r0[${ix[k]}];`, `v1[${k}] = r1[${ix[k]}];`);
+  for (let k = 0; k < mPos.length; k++) code.push(`da[${k}] = r0[${mPos[k]}] - r0[${mNeg[k]}] - mOff[${k}];`, `db[${k}] = r1[${mPos[k]}] - r1[${mNeg[k]}];`);
   code.push('return true;');
-  return new Function('a', 'b0', 'b1', code.join('\n')) as EnvelopeKernel;
+  return code;
 }

@@ -1,6 +1,14 @@
-import { type Envelope, envelopeOf, envelopeToDense, luSolve2, solveEnvelope2 } from './factor';
+import { type Envelope, envelopeOf, envelopeToDense, ldltEnvelope2, luSolve2 } from './factor';
+import { type KernelArrays, kernelFor, type SolveKernel } from './kernel';
 import { envelopeStarts, reverseCuthillMcKee } from './ordering';
 import { GND, type Network } from './types';
+
+/**
+ * Factorisations after which a solver writes its wiring out as straight-line code (`kernel.ts`):
+ * every spread run reaches it within its first trials; a one-off analysis does not, and keeps the
+ * loops, which stay compiled from analysis to analysis.
+ */
+export const KERNEL_AFTER = 64;
 
 /** Most solutions a solver keeps before it starts its cache afresh. */
 const CACHE_LIMIT = 4096;
@@ -33,8 +41,9 @@ export interface Solution {
 
 /**
  * Two-terminal branches in flat arrays: current from a[k] to b[k] = g[k]·(V(a) − V(b) − e[k]). The
- * ends are kept both as nodes (`a`, `b`) and as indices into a solver's extended vectors (`ia`,
- * `ib`, see `Solver`). Flat arrays keep the per-state work free of object lookups.
+ * ends (wiring, set once) are kept both as nodes (`a`, `b`) and as indices into a solver's extended
+ * vectors (`ia`, `ib`, see `Solver`); `g` and `e` (values) are set by each `load`. Flat arrays keep
+ * the per-state work free of object lookups.
  */
 class Branches {
   readonly a: number[];
@@ -43,7 +52,7 @@ class Branches {
   readonly ib: Int32Array;
   readonly g: Float64Array;
   readonly e: Float64Array;
-  constructor(count: number, private readonly ext: (node: number) => number) {
+  constructor(count: number) {
     this.a = new Array<number>(count).fill(GND);
     this.b = new Array<number>(count).fill(GND);
     this.ia = new Int32Array(count);
@@ -51,13 +60,11 @@ class Branches {
     this.g = new Float64Array(count);
     this.e = new Float64Array(count);
   }
-  set(k: number, a: number, b: number, g: number, e: number): void {
+  wire(k: number, a: number, b: number, ext: (node: number) => number): void {
     this.a[k] = a;
     this.b[k] = b;
-    this.ia[k] = this.ext(a);
-    this.ib[k] = this.ext(b);
-    this.g[k] = g;
-    this.e[k] = e;
+    this.ia[k] = ext(a);
+    this.ib[k] = ext(b);
   }
 }
 
@@ -173,6 +180,11 @@ export class Solver {
   private lastKey: number | string = -1;
   private lastSol: Solution | null = null;
   private lastGeneration = -1;
+  /** Factorisations so far, counted up to KERNEL_AFTER. */
+  private uses = 0;
+  /** The straight-line code for this wiring, once it is hot (null before, or when too large). */
+  private kernel: SolveKernel | null = null;
+  private readonly arrays: KernelArrays;
   /** Per node, the branches that end there (see `touching`). */
   private readonly incident = new Map<number, { fixed: number[]; elements: number[] }>();
 
@@ -201,22 +213,31 @@ export class Solver {
     this.work = this.arena.take(this.env.size);
     this.baseR0 = this.arena.take(nu);
     this.baseR1 = this.arena.take(nu);
-    this.fixed = new Branches(net.resistors.length, ext);
-    this.on = new Branches(this.count, ext);
-    this.off = new Branches(this.count, ext);
+    this.fixed = new Branches(net.resistors.length);
+    this.on = new Branches(this.count);
+    this.off = new Branches(this.count);
     this.hasOff = new Uint8Array(this.count);
     this.mPos = new Int32Array(this.count);
     this.mNeg = new Int32Array(this.count);
     this.mOff = new Float64Array(this.count);
+    net.resistors.forEach((r, k) => this.fixed.wire(k, r.a, r.b, ext));
     net.comparators.forEach((c, k) => {
+      this.on.wire(k, c.out, GND, ext);
+      if (c.pushPull) {
+        this.off.wire(k, c.out, net.supply, ext);
+        this.hasOff[k] = 1;
+      }
       this.mPos[k] = ext(c.minus);
       this.mNeg[k] = ext(c.plus);
     });
     const nc = net.comparators.length;
     net.diodes.forEach((d, k) => {
+      this.on.wire(nc + k, d.anode, d.cathode, ext);
       this.mPos[nc + k] = ext(d.anode);
       this.mNeg[nc + k] = ext(d.cathode);
     });
+    const { work, baseA, ext0, ext1, baseR0, baseR1, on, off, mOff } = this;
+    this.arrays = { work, baseA, ext0, ext1, baseR0, baseR1, onG: on.g, onE: on.e, offG: off.g, offE: off.e, mOff };
     this.load(net);
   }
 
@@ -252,10 +273,11 @@ export class Solver {
       this.inject(c.plus, c.ibPlus, 0);
       this.inject(c.minus, c.ibMinus, 0);
       mOff[k] = c.vos;
-      on.set(k, c.out, GND, 1 / c.rsat, c.vsat0);
-      if (c.pushPull) {
-        off.set(k, c.out, net.supply, 1 / c.rout, -c.vohDrop);
-        this.hasOff[k] = 1;
+      on.g[k] = 1 / c.rsat;
+      on.e[k] = c.vsat0;
+      if (this.hasOff[k]) {
+        off.g[k] = 1 / c.rout;
+        off.e[k] = -c.vohDrop;
       }
     }
     for (let k = 0; k < this.size; k++) {
@@ -266,12 +288,13 @@ export class Solver {
     }
     for (let k = 0; k < resistors.length; k++) {
       const r = resistors[k];
-      fixed.set(k, r.a, r.b, 1 / r.ohms, 0);
+      fixed.g[k] = 1 / r.ohms;
       this.stamp(baseA, baseR0, baseR1, fixed, k);
     }
     for (let k = 0; k < diodes.length; k++) {
       const d = diodes[k];
-      on.set(nc + k, d.anode, d.cathode, 1 / (d.rSeries + d.rdyn), d.knee);
+      on.g[nc + k] = 1 / (d.rSeries + d.rdyn);
+      on.e[nc + k] = d.knee;
       mOff[nc + k] = d.knee;
     }
   }
@@ -379,22 +402,41 @@ export class Solver {
     }
   }
 
+  /** Whether this solver runs its wiring's straight-line code (see KERNEL_AFTER). */
+  get compiled(): boolean {
+    return this.kernel !== null;
+  }
+
   /** Factors and solves `state`, into `reuse`'s arrays when given (a solution of an earlier `load`). */
   private factorAndSolve(state: State, reuse?: Solution): Solution {
     const { size: n, nu, ext0, ext1, ix } = this;
-    this.stampState(state);
-    let ok = solveEnvelope2(this.work, this.env, ext0, ext1);
-    if (!ok) {
-      this.stampState(state);
-      ok = luSolve2(envelopeToDense(this.work, this.env), nu, ext0.subarray(0, nu), ext1.subarray(0, nu));
+    if (this.kernel === null && ++this.uses === KERNEL_AFTER) {
+      const { env, on, off, hasOff, mPos, mNeg } = this;
+      this.kernel = kernelFor({ env, nu, ix, onA: on.ia, onB: on.ib, offA: off.ia, offB: off.ib, hasOff, mPos, mNeg });
     }
     // New solutions take their arrays from the arena: a typed array of its own costs about ten times more.
     const { arena } = this;
     const sol = reuse ?? {
       v0: arena.take(n), v1: arena.take(n), da: arena.take(state.length), db: arena.take(state.length),
-      ok, state: new Uint8Array(state.length),
+      ok: true, state: new Uint8Array(state.length),
     };
+    sol.state.set(state);
     const { v0, v1, da, db } = sol;
+    let ok: boolean;
+    if (this.kernel !== null) {
+      ok = this.kernel(state, this.arrays, v0, v1, da, db);
+      if (ok) {
+        sol.ok = true;
+        return sol;
+      }
+    } else {
+      this.stampState(state);
+      ok = ldltEnvelope2(this.work, this.env, ext0, ext1);
+    }
+    if (!ok) {
+      this.stampState(state);
+      ok = luSolve2(envelopeToDense(this.work, this.env), nu, ext0.subarray(0, nu), ext1.subarray(0, nu));
+    }
     for (let k = 0; k < n; k++) {
       v0[k] = ext0[ix[k]];
       v1[k] = ext1[ix[k]];
@@ -407,7 +449,6 @@ export class Solver {
       db[k] = ext1[p] - ext1[q];
     }
     sol.ok = ok;
-    sol.state.set(state);
     return sol;
   }
 }
