@@ -157,14 +157,25 @@ export class SpreadPool {
 }
 
 /**
+ * Trials a one-off run needs per worker it starts. A fresh worker takes about 50 ms to start and a
+ * few hundred more before its code is compiled, and meanwhile competes with this thread for the
+ * cores: on a 2-core machine a one-off run of 10 000 trials took 300–430 ms with one worker and
+ * about 200 ms without, and even 40 000 trials gained nothing. A pool kept warm (the screen's) is
+ * a different matter: there two workers run 10 000 trials in about 60 % of one thread's time.
+ */
+export const TRIALS_PER_WORKER = 20_000;
+
+/**
  * Runs worst case and Monte Carlo for `design` on a one-off pool (workers started for this run and
- * ended after it), as the batch command does. This thread works too from the first moment, so the
- * default is one worker fewer than the cores; `threads` (workers besides this thread) is capped at
- * the number of jobs.
+ * ended after it), as the batch command does. This thread works too from the first moment. By
+ * default a run starts one worker per TRIALS_PER_WORKER trials, at most one per core but one;
+ * `threads` (workers besides this thread) sets the number, capped at the number of jobs.
  */
 export async function runSpreadParallel(design: Design, options: SpreadRunOptions & PoolOptions = {}): Promise<ParallelSpread> {
-  const jobCount = spreadJobs(0, options.trials ?? DEFAULT_TRIALS, 1, options.chunk ?? DEFAULT_CHUNK, options.worstCase !== false).length;
-  const threads = Math.min(Math.floor(options.threads ?? availableParallelism() - 1), jobCount);
+  const trials = options.trials ?? DEFAULT_TRIALS;
+  const jobCount = spreadJobs(0, trials, 1, options.chunk ?? DEFAULT_CHUNK, options.worstCase !== false).length;
+  const wanted = options.threads ?? Math.min(availableParallelism() - 1, trials / TRIALS_PER_WORKER);
+  const threads = Math.max(0, Math.min(Math.floor(wanted), jobCount));
   const pool = new SpreadPool({ threads, workerUrl: options.workerUrl, helpHere: options.helpHere ?? true });
   try {
     return await pool.run(design, options);
