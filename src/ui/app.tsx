@@ -52,7 +52,7 @@ export function App({ initial, services, noColor, onExit, size: fixedSize, onFlu
   const theme = useMemo(() => makeTheme({ ascii: settings.ascii, color: !noColor }), [settings.ascii, noColor]);
   const computed = useAnalysis(state.design);
   const probe = useProbe(computed, state.probe.x, state.probe.direction);
-  const layout = computeLayout(size.columns, size.rows, state.design.channels.length);
+  const layout = computeLayout(size.columns, size.rows, state.design.channels.length, state.pane === 'targets' || state.pane === 'findings');
   const autosave = useAutosave({ design: state.design, isModified: isModified(state), file: state.file, drafts: services.drafts, now: services.now });
   onFlushReady?.(autosave.flush);
   const ctx: KeyContext = { state, hasPlanner: !!services.plan, hasSpread: !!services.spread, hasExport: !!services.exportDesign };
@@ -112,7 +112,7 @@ export function App({ initial, services, noColor, onExit, size: fixedSize, onFlu
             isFocused={state.pane === 'string'} width={layout.leftWidth} height={layout.middleHeight - (footerRows - 1)} theme={theme} />
           <Box width={1} />
           <Box flexDirection="column" width={layout.rightWidth}>
-            <SweepPane design={state.design} analysis={a} probeX={state.probe.x} selectedChannel={selChannel} width={layout.rightWidth} height={layout.sweepHeight} theme={theme} />
+            {layout.sweepHeight > 0 && <SweepPane design={state.design} analysis={a} probeX={state.probe.x} selectedChannel={selChannel} width={layout.rightWidth} height={layout.sweepHeight} theme={theme} />}
             <ProbePane design={state.design} probe={probe} width={layout.rightWidth} height={layout.probeHeight} theme={theme} />
             {state.pane === 'targets'
               ? <TargetsPane design={state.design} fields={paneFields(state.design, 'targets')} channels={a.channels} matches={matches}

@@ -15,7 +15,7 @@ export interface Layout {
   /** Width of the string pane on the left of the middle band; the right column gets the rest. */
   leftWidth: number;
   rightWidth: number;
-  /** Heights including each pane's title line. */
+  /** Heights including each pane's title line; the sweep's is 0 while it gives its rows to the lower pane. */
   channelsHeight: number;
   middleHeight: number;
   sweepHeight: number;
@@ -25,8 +25,13 @@ export interface Layout {
   isWide: boolean;
 }
 
-/** The layout for a terminal of `columns` x `rows` and a design with `channels` channels, or null when too small. */
-export function computeLayout(columns: number, rows: number, channels: number): Layout | null {
+/**
+ * The layout for a terminal of `columns` x `rows` and a design with `channels` channels, or null
+ * when too small. With `lowerFocused` (the targets or findings pane has the focus) the lower pane
+ * takes the sweep's rows too: on 80x24 findings and spread results would otherwise show one or two
+ * lines at a time.
+ */
+export function computeLayout(columns: number, rows: number, channels: number, lowerFocused = false): Layout | null {
   if (columns < MIN_COLUMNS || rows < MIN_ROWS) return null;
   // Title bar, message or prompt line, hint bar.
   const body = rows - 3;
@@ -39,7 +44,8 @@ export function computeLayout(columns: number, rows: number, channels: number): 
   const lowerHeight = middleHeight - sweepHeight - probeHeight;
   return {
     columns, rows, leftWidth, rightWidth: columns - leftWidth - 1, channelsHeight, middleHeight,
-    sweepHeight, probeHeight, lowerHeight, isWide: columns >= 100,
+    sweepHeight: lowerFocused ? 0 : sweepHeight, probeHeight, lowerHeight: lowerFocused ? lowerHeight + sweepHeight : lowerHeight,
+    isWide: columns >= 100,
   };
 }
 

@@ -16,6 +16,14 @@ describe('layout', () => {
     expect(l.leftWidth + 1 + l.rightWidth).toBe(80);
   });
 
+  it('gives the rows of the sweep to the lower pane while targets or findings have the focus', () => {
+    const normal = computeLayout(80, 24, 8)!;
+    const lower = computeLayout(80, 24, 8, true)!;
+    expect(lower.sweepHeight).toBe(0);
+    expect(lower.lowerHeight).toBe(normal.lowerHeight + normal.sweepHeight);
+    expect(lower.sweepHeight + lower.probeHeight + lower.lowerHeight).toBe(lower.middleHeight);
+  });
+
   it('scrolls so the selection stays visible', () => {
     expect(scrollStart(0, 30, 10)).toBe(0);
     expect(scrollStart(29, 30, 10)).toBe(20);
