@@ -164,6 +164,17 @@ describe('App', () => {
     app.unmount();
   });
 
+  it('control keys in one chunk (two Tabs, three Tabs) each count, as typed alone', async () => {
+    const app = renderApp();
+    await app.press('\t\t');
+    await app.waitFor('▸ Targets', 2000);
+    expect(app.frame()).toContain('▸ Targets');
+    await app.press('\t\t\t');
+    await app.waitFor('▸ Channels', 2000);
+    expect(app.frame()).toContain('▸ Channels');
+    app.unmount();
+  });
+
   it('a value and its Enter in one chunk are typed and accepted (a slow link batches keys)', async () => {
     const app = renderApp();
     await app.press(KEYS.enter, '\u0015');

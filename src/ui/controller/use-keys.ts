@@ -63,9 +63,8 @@ export function useKeys(options: KeysOptions): void {
   const feed = (input: string, key: Key) => {
     const chars = [...input];
     if (chars.length <= 1 || key.ctrl || key.meta) return handle(input, key);
-    const plain = (c: string): Key => ({ ...key, shift: /[A-Z]/.test(c) });
     if (activeScope(latest.current.ctx.state) !== 'prompt') {
-      handle(chars[0], plain(chars[0]));
+      handle(...charKey(chars[0]));
       return later(chars.slice(1).join(''));
     }
     const end = input.search(/[\r\n]/);
@@ -74,16 +73,41 @@ export function useKeys(options: KeysOptions): void {
       handle(input.slice(0, end), key);
       return later(input.slice(end));
     }
-    handle('\r', plain('\r'));
+    handle(...charKey('\r'));
     later(input.slice(input.startsWith('\r\n') ? 2 : 1));
   };
   useEffect(() => {
     const text = rest.current;
     if (!text) return;
     rest.current = '';
-    feed(text, { ...NO_KEY });
+    // The rest of a chunk carries no key flags: a last lone character is read as it would be alone.
+    if ([...text].length === 1) handle(...charKey(text));
+    else feed(text, { ...NO_KEY });
   });
   useInput(feed);
+}
+
+/**
+ * One character of a chunk as Ink reports it when it arrives alone: Tab, Enter (CR or LF),
+ * Backspace, Delete, Esc and Ctrl+letter set their flags (a Ctrl+letter's input is the letter),
+ * anything else is text.
+ * A chunk of several keys reaches `useInput` as plain text with no flags: "\t\t" is not a Tab.
+ */
+function charKey(c: string): [string, Key] {
+  const key = { ...NO_KEY };
+  if (c === '\r' || c === '\n') key.return = true;
+  else if (c === '\t') key.tab = true;
+  else if (c === '\b') key.backspace = true;
+  else if (c === '\u007f') key.delete = true;
+  else if (c === '\u001b') key.escape = key.meta = true;
+  else if (c >= '\u0001' && c <= '\u001a') {
+    key.ctrl = true;
+    return [String.fromCharCode(c.charCodeAt(0) + 96), key];
+  } else {
+    key.shift = /[A-Z]/.test(c);
+    return [c, key];
+  }
+  return ['', key];
 }
 
 /** An Ink key record with no special key or modifier set (plain characters). */
