@@ -16,7 +16,8 @@ FILE or an option cannot be read.
 
 Options:
   --trials N   Monte Carlo trials (default ${DEFAULT_TRIALS})
-  --seed S     seed, a whole number from 0 to 4294967295 (default 1); the same seed gives the same numbers
+  --seed S     seed, a whole number from 0 to 4294967295 (default 1); the same seed gives
+               the same numbers
   --threads T  worker threads besides this one (default: one per 20000 trials, at most one per
                core but one; 0 runs here only)
   --json       print a machine-readable document instead of the report

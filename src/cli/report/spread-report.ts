@@ -1,5 +1,6 @@
 /** The spread report as text for the terminal and as a JSON document. */
 import type { Caution } from '../../engine/cautions';
+import { wrapWords } from '../../ui/common/wrap-words';
 import type { Design } from '../../engine/design/types';
 import { PART_VALUES_NOTE } from '../../engine/parts';
 import type { QuantitySpread, SpreadReport } from '../../engine/spread';
@@ -56,7 +57,8 @@ export function spreadText(design: Design, r: SpreadReport, cautions: Caution[],
   if (r.chatter > 0) lines.push(`${pct(r.chatter)} of trials have a band with no stable state (the circuit chatters there).`);
   if (cautions.length) {
     lines.push('', 'Cautions (follow local codes and licensed practice):');
-    for (const c of cautions) lines.push(`- ${c.text}`);
+    // Wrapped for an 80-column terminal, each under its dash.
+    for (const c of cautions) wrapWords(c.text, 76).forEach((t, k) => lines.push(`${k === 0 ? '-' : ' '} ${t}`));
   }
   return `${lines.join('\n')}\n`;
 }
