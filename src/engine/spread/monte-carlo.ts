@@ -3,7 +3,7 @@
  * parameters from its own generator seeded by (seed, t), so any split of the trials over threads
  * gives the same numbers.
  */
-import { createRng, drawUnit } from './distributions';
+import { drawUnit, SeededRng } from './distributions';
 import { type SpreadModel, sweepAt } from './model';
 
 /** Raw results of trials `from` .. `to` − 1, channel-major within each trial. */
@@ -18,9 +18,12 @@ export interface TrialBlock {
   chatter: Uint8Array;
 }
 
-/** Draws the unit point of trial `trial` for seed `seed`: one value in [-1, 1] per parameter. */
-export function trialUnits(model: SpreadModel, seed: number, trial: number, out = new Float64Array(model.params.length)): Float64Array {
-  const rng = createRng(seed, trial);
+/**
+ * Draws the unit point of trial `trial` for seed `seed`: one value in [-1, 1] per parameter. A
+ * caller drawing many trials passes one `rng` to be reseeded for each (same numbers, no garbage).
+ */
+export function trialUnits(model: SpreadModel, seed: number, trial: number, out = new Float64Array(model.params.length), rng = new SeededRng(seed, trial)): Float64Array {
+  rng.reseed(seed, trial);
   const params = model.params;
   for (let k = 0; k < params.length; k++) out[k] = drawUnit(rng, params[k].distribution);
   return out;
@@ -41,8 +44,9 @@ export function runTrials(model: SpreadModel, seed: number, from: number, to: nu
     chatter: new Uint8Array(count),
   };
   const units = new Float64Array(model.params.length);
+  const rng = new SeededRng(seed, from);
   for (let i = 0; i < count; i++) {
-    trialUnits(model, seed, from + i, units);
+    trialUnits(model, seed, from + i, units, rng);
     block.chatter[i] = sweepAt(model, units, block.rising, block.falling, i * n) ? 1 : 0;
     onTrial?.(i + 1);
   }
