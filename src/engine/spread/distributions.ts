@@ -24,8 +24,8 @@ function splitmix32(state: number): number {
 /**
  * xoshiro128** generator seeded from the two 32-bit words (seed, stream). Its four state words are
  * filled by splitmix32 so neighbouring seeds and streams give unrelated sequences. The state lives
- * in an Int32Array: as plain numbers, words beyond the small-integer range would be boxed on every
- * step (about 4 kB of garbage per Monte Carlo trial). `reseed` starts another stream in place.
+ * in an Int32Array, so the words stay raw 32-bit integers; `reseed` starts another stream in place,
+ * so a run of trials needs one generator, not one per trial.
  */
 export class SeededRng implements Rng {
   private readonly s = new Int32Array(4);
