@@ -14,16 +14,16 @@ export interface KernelPlan {
   /** Unknowns: the first `nu` entries of the extended vectors. */
   nu: number;
   /** Extended-vector index of every node. */
-  ix: Int32Array;
-  /** Each element's branch when set (on) and, where `hasOff`, when clear (off): extended-vector ends. */
-  onA: Int32Array;
-  onB: Int32Array;
-  offA: Int32Array;
-  offB: Int32Array;
-  hasOff: Uint8Array;
+  ix: readonly number[];
+  /** Each element's branch when set (on) and, where `hasOff` is 1, when clear (off): extended-vector ends. */
+  onA: readonly number[];
+  onB: readonly number[];
+  offA: readonly number[];
+  offB: readonly number[];
+  hasOff: readonly number[];
   /** Each element's margin pins (extended-vector indices). */
-  mPos: Int32Array;
-  mNeg: Int32Array;
+  mPos: readonly number[];
+  mNeg: readonly number[];
 }
 
 /** The arrays a kernel works on, all owned by the solver. */

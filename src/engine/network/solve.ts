@@ -48,17 +48,18 @@ export interface Solution {
 class Branches {
   readonly a: number[];
   readonly b: number[];
-  readonly ia: Int32Array;
-  readonly ib: Int32Array;
+  readonly ia: number[];
+  readonly ib: number[];
   readonly g: Float64Array;
   readonly e: Float64Array;
-  constructor(count: number) {
+  /** Plain arrays and arena views: a typed array of its own costs about a microsecond to make. */
+  constructor(count: number, arena: Arena) {
     this.a = new Array<number>(count).fill(GND);
     this.b = new Array<number>(count).fill(GND);
-    this.ia = new Int32Array(count);
-    this.ib = new Int32Array(count);
-    this.g = new Float64Array(count);
-    this.e = new Float64Array(count);
+    this.ia = new Array<number>(count).fill(0);
+    this.ib = new Array<number>(count).fill(0);
+    this.g = arena.take(count);
+    this.e = arena.take(count);
   }
   wire(k: number, a: number, b: number, ext: (node: number) => number): void {
     this.a[k] = a;
@@ -150,7 +151,7 @@ export class Solver {
   private readonly env: Envelope;
   private readonly count: number;
   /** Extended-vector index of every node (see the class comment). */
-  private readonly ix: Int32Array;
+  private readonly ix: number[];
   private readonly arena: Arena;
   private readonly ext0: Float64Array;
   private readonly ext1: Float64Array;
@@ -164,10 +165,10 @@ export class Solver {
   private readonly fixed: Branches;
   private readonly on: Branches;
   private readonly off: Branches;
-  private readonly hasOff: Uint8Array;
+  private readonly hasOff: number[];
   /** Each element's margin: ext[mPos] − ext[mNeg] − mOff (see Solution.da). */
-  private readonly mPos: Int32Array;
-  private readonly mNeg: Int32Array;
+  private readonly mPos: number[];
+  private readonly mNeg: number[];
   private readonly mOff: Float64Array;
   /**
    * Solutions by state key, each tagged with the `load` it belongs to: after a `load` an entry of an
@@ -198,13 +199,15 @@ export class Solver {
     this.nu = nu;
     this.env = layout.envelope;
     this.count = net.comparators.length + net.diodes.length;
-    const ix = new Int32Array(n);
+    const ix = new Array<number>(n).fill(0);
     let held = nu;
     for (let k = 0; k < n; k++) ix[k] = layout.slot[k] >= 0 ? layout.slot[k] : held++;
     this.ix = ix;
     const ground = held;
     const ext = (node: number) => (node === GND ? ground : ix[node]);
-    this.arena = new Arena(2 * (ground + 1) + 2 * n + 2 * this.env.size + 3 * nu + 6 * n + 4 * this.count);
+    // The fixed arrays below, and room for the first few solutions (v0, v1, da, db each).
+    const fixedSize = 2 * (ground + 1) + 2 * n + 2 * this.env.size + 2 * nu + 2 * net.resistors.length + 5 * this.count;
+    this.arena = new Arena(fixedSize + 3 * (2 * n + 2 * this.count));
     this.ext0 = this.arena.take(ground + 1);
     this.ext1 = this.arena.take(ground + 1);
     this.inj0 = this.arena.take(n);
@@ -213,13 +216,13 @@ export class Solver {
     this.work = this.arena.take(this.env.size);
     this.baseR0 = this.arena.take(nu);
     this.baseR1 = this.arena.take(nu);
-    this.fixed = new Branches(net.resistors.length);
-    this.on = new Branches(this.count);
-    this.off = new Branches(this.count);
-    this.hasOff = new Uint8Array(this.count);
-    this.mPos = new Int32Array(this.count);
-    this.mNeg = new Int32Array(this.count);
-    this.mOff = new Float64Array(this.count);
+    this.fixed = new Branches(net.resistors.length, this.arena);
+    this.on = new Branches(this.count, this.arena);
+    this.off = new Branches(this.count, this.arena);
+    this.hasOff = new Array<number>(this.count).fill(0);
+    this.mPos = new Array<number>(this.count).fill(0);
+    this.mNeg = new Array<number>(this.count).fill(0);
+    this.mOff = this.arena.take(this.count);
     net.resistors.forEach((r, k) => this.fixed.wire(k, r.a, r.b, ext));
     net.comparators.forEach((c, k) => {
       this.on.wire(k, c.out, GND, ext);
