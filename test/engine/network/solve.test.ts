@@ -146,6 +146,22 @@ describe('Solver written out as straight-line code', () => {
     }
   });
 
+  test('a wiring too large to write out keeps the loops, with the same answers', () => {
+    // 80 nodes joined by 600 random resistors: the envelope is nearly full, far past the statement limit.
+    const r = rng(90);
+    const n = 80;
+    const net: Network = { nodes: Array.from({ length: n }, (_, k) => `n${k}`), resistors: [], vsources: [{ id: 'V0', node: 0, c0: 5, c1: 1 }], isources: [], comparators: [], diodes: [], supply: 0, supplySource: 0, quiescent: 0 };
+    for (let k = 1; k < n; k++) net.resistors.push({ id: `T${k}`, a: k, b: k - 1, ohms: logUniform(r, 100, 1e5) });
+    for (let k = 0; k < 600; k++) net.resistors.push({ id: `X${k}`, a: Math.floor(r() * n), b: Math.floor(r() * n) - 1, ohms: logUniform(r, 100, 1e5) });
+    const solver = new Solver(net);
+    for (let k = 0; k < KERNEL_AFTER + 1; k++) {
+      solver.load(net);
+      solver.solve(new Uint8Array(0));
+    }
+    expect(solver.compiled).toBe(false);
+    expect(bits(solver.solve(new Uint8Array(0)))).toEqual(bits(new Solver(net).solve(new Uint8Array(0))));
+  });
+
   test('falls back to pivoting LU as the loops do when the matrix is not positive definite', () => {
     // A negative resistance (not a physical part) makes the matrix indefinite: LDLᵀ fails part-way.
     for (let seed = 400; seed < 420; seed++) {
