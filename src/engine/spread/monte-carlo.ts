@@ -22,8 +22,9 @@ export interface TrialBlock {
  * Draws the unit point of trial `trial` for seed `seed`: one value in [-1, 1] per parameter. A
  * caller drawing many trials passes one `rng` to be reseeded for each (same numbers, no garbage).
  */
-export function trialUnits(model: SpreadModel, seed: number, trial: number, out = new Float64Array(model.params.length), rng = new SeededRng(seed, trial)): Float64Array {
-  rng.reseed(seed, trial);
+export function trialUnits(model: SpreadModel, seed: number, trial: number, out = new Float64Array(model.params.length), rng?: SeededRng): Float64Array {
+  if (rng) rng.reseed(seed, trial);
+  else rng = new SeededRng(seed, trial);
   const params = model.params;
   for (let k = 0; k < params.length; k++) out[k] = drawUnit(rng, params[k].distribution);
   return out;
@@ -44,6 +45,7 @@ export function runTrials(model: SpreadModel, seed: number, from: number, to: nu
     chatter: new Uint8Array(count),
   };
   const units = new Float64Array(model.params.length);
+  // Reseeded for each trial by trialUnits.
   const rng = new SeededRng(seed, from);
   for (let i = 0; i < count; i++) {
     trialUnits(model, seed, from + i, units, rng);
